@@ -1,0 +1,29 @@
+// Jest projects for the Node-side suites: the isomorphic shared code and the server.
+// The Angular suites use jest.angular.config.js, the browser flows jest.e2e.config.js.
+const swc = ['@swc/jest', { jsc: { parser: { syntax: 'typescript' }, target: 'es2022' }, module: { type: 'commonjs' } }];
+const aliases = { '^@tumblewise/shared$': '<rootDir>/shared/src/index.ts' };
+
+module.exports = {
+  projects: [
+    {
+      displayName: 'shared',
+      rootDir: __dirname,
+      testEnvironment: 'node',
+      testMatch: ['<rootDir>/shared/**/*.spec.ts'],
+      transform: { '^.+\\.ts$': swc },
+      moduleNameMapper: aliases,
+    },
+    {
+      displayName: 'server',
+      rootDir: __dirname,
+      testEnvironment: 'node',
+      testMatch: ['<rootDir>/server/**/*.spec.ts'],
+      transform: { '^.+\\.ts$': swc },
+      moduleNameMapper: aliases,
+      globalSetup: '<rootDir>/server/test-support/global-setup.ts',
+      globalTeardown: '<rootDir>/server/test-support/global-teardown.ts',
+      setupFiles: ['<rootDir>/server/test-support/env.ts'],
+      testTimeout: 30000,
+    },
+  ],
+};

@@ -1,0 +1,5 @@
+export * from './common';
+export * from './roles';
+export * from './accounts';
+export * from './members';
+export * from './projects';
