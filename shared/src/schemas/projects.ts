@@ -16,3 +16,10 @@ export const projectSchema = z.object({
   updatedAt: timestampSchema,
 });
 export type Project = z.infer<typeof projectSchema>;
+
+export const createProjectBodySchema = z.object({
+  name: z.string({ message: 'is required' }).trim().min(1, { message: 'is required' }).max(120, { message: 'must be at most 120 characters' }),
+  category: gearCategorySchema,
+  notes: z.string().max(5000, { message: 'must be at most 5000 characters' }).optional(),
+});
+export type CreateProjectBody = z.infer<typeof createProjectBodySchema>;

@@ -1,0 +1,60 @@
+import cookieParser from 'cookie-parser';
+import express, { Router } from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import type { AppContext } from './app-context';
+import { authRoutes } from './accounts/auth-routes';
+import { meRoutes } from './accounts/me-routes';
+import { auditRoutes } from './audit/audit-routes';
+import { healthRoutes } from './health/health-routes';
+import { apiNotFound, errorHandler } from './http/error-handler';
+import { authenticate, workspaceGate } from './http/authenticate';
+import { invitationAcceptRoutes, invitationRoutes } from './invitations/invitation-routes';
+import { memberRoutes } from './members/member-routes';
+import { docsRoutes } from './openapi/docs-routes';
+import { projectRoutes } from './projects/project-routes';
+import { serveApps } from './static/serve-apps';
+
+/** Builds the Express app (no port): the API under /api/v1 and the two built apps. */
+export function createApp(ctx: AppContext): express.Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', ctx.config.trustProxy);
+  app.use(helmet({
+    contentSecurityPolicy: { directives: { 'font-src': ["'self'", 'data:'], 'img-src': ["'self'", 'data:', 'blob:'], 'connect-src': ["'self'"], 'upgrade-insecure-requests': null } },
+    strictTransportSecurity: ctx.config.env === 'production',
+  }));
+  app.use(pinoHttp({
+    logger: ctx.logger,
+    redact: { paths: ['req.headers.authorization', 'req.headers.cookie', 'res.headers["set-cookie"]'], censor: '[hidden]' },
+    serializers: {
+      req: (req) => ({ id: req.id, method: req.method, url: String(req.url).replace(/token=[^&]+/g, 'token=[hidden]') }),
+      res: (res) => ({ statusCode: res.statusCode }),
+    },
+    autoLogging: { ignore: (req) => !req.url?.startsWith('/api/') },
+  }));
+
+  const api = Router();
+  api.use(express.json({ limit: ctx.config.limits.jsonBody }));
+  api.use(cookieParser());
+  api.use(authenticate(ctx.tokens));
+  api.use(healthRoutes(ctx));
+  api.use(docsRoutes(ctx));
+  api.use('/auth', authRoutes(ctx));
+  api.use('/invitations', invitationAcceptRoutes(ctx));
+  api.use(meRoutes(ctx));
+
+  const workspace = Router({ mergeParams: true });
+  workspace.use(workspaceGate);
+  memberRoutes(ctx, workspace);
+  invitationRoutes(ctx, workspace);
+  auditRoutes(ctx, workspace);
+  projectRoutes(ctx, workspace);
+  api.use('/workspaces/:workspaceId', workspace);
+
+  api.use(apiNotFound);
+  app.use('/api/v1', api);
+  app.use(serveApps(ctx.config.appDistDir));
+  app.use(errorHandler(ctx.logger));
+  return app;
+}

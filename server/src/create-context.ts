@@ -1,0 +1,35 @@
+import pino from 'pino';
+import { AccessTokens } from './accounts/access-tokens';
+import { Passwords } from './accounts/passwords';
+import { SignInSessions } from './accounts/sign-in-sessions';
+import type { AppContext } from './app-context';
+import { PaymentProvider } from './billing/payment-provider';
+import type { Config } from './config/config';
+import { createDatabase } from './db/database';
+import { ApiCatalogue } from './http/api-catalogue';
+import { AttemptLimits } from './http/attempt-limits';
+import { Mailer } from './mail/mailer';
+
+/** Wires the collaborators of one server process from its configuration. */
+export function createContext(config: Config): AppContext {
+  const logger = pino({ level: config.logLevel, redact: ['password', '*.password', 'token', '*.token', 'accessToken', '*.accessToken'] });
+  const sequelize = createDatabase(config.databaseUrl);
+  return {
+    config,
+    logger,
+    sequelize,
+    mailer: new Mailer(config.mail),
+    tokens: new AccessTokens(config.auth),
+    passwords: new Passwords(config.auth.bcryptCost),
+    sessions: new SignInSessions(config.auth),
+    limits: new AttemptLimits(sequelize, config.limits),
+    payment: new PaymentProvider(config.payment),
+    catalogue: new ApiCatalogue(),
+  };
+}
+
+/** Closes pools and connections so the process can exit. */
+export async function closeContext(ctx: AppContext): Promise<void> {
+  ctx.mailer.close();
+  await ctx.sequelize.close();
+}

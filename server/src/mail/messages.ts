@@ -1,0 +1,39 @@
+import type { OutgoingMail } from './mailer';
+
+const escape = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+
+function layout(title: string, paragraphs: string[], action: { label: string; url: string }, footer: string): string {
+  return `<!doctype html><html><body style="font-family:Roboto,Arial,sans-serif;color:#1d2530;max-width:560px">
+<h2 style="color:#0f5c63">${escape(title)}</h2>
+${paragraphs.map((p) => `<p>${escape(p)}</p>`).join('\n')}
+<p><a href="${escape(action.url)}" style="background:#0f5c63;color:#fff;padding:10px 18px;border-radius:6px;text-decoration:none">${escape(action.label)}</a></p>
+<p style="font-size:13px;color:#555">Or open this address: ${escape(action.url)}</p>
+<p style="font-size:12px;color:#777">${escape(footer)}</p>
+</body></html>`;
+}
+
+/** The invitation e-mail with its accept link. */
+export function invitationMail(args: { to: string; workspaceName: string; inviterName: string | null; role: string; url: string; days: number }): OutgoingMail {
+  const who = args.inviterName ? `${args.inviterName} invites you` : 'You are invited';
+  const lines = [
+    `${who} to join the workspace "${args.workspaceName}" on Tumblewise as ${args.role}.`,
+    `The link works once and expires in ${args.days} days.`,
+  ];
+  return {
+    to: args.to,
+    subject: `Join ${args.workspaceName} on Tumblewise`,
+    text: `${lines.join('\n')}\n\nAccept the invitation: ${args.url}\n\nIf you did not expect this, ignore this e-mail.`,
+    html: layout(`Join ${args.workspaceName}`, lines, { label: 'Accept the invitation', url: args.url }, 'If you did not expect this, ignore this e-mail.'),
+  };
+}
+
+/** The password-reset e-mail with its single-use link. */
+export function passwordResetMail(args: { to: string; name: string; url: string; minutes: number }): OutgoingMail {
+  const lines = [`Hello ${args.name},`, `someone asked to reset the password of your Tumblewise account. The link works once and expires in ${args.minutes} minutes.`];
+  return {
+    to: args.to,
+    subject: 'Reset your Tumblewise password',
+    text: `${lines.join('\n')}\n\nChoose a new password: ${args.url}\n\nIf it was not you, ignore this e-mail; your password stays as it is.`,
+    html: layout('Reset your password', lines, { label: 'Choose a new password', url: args.url }, 'If it was not you, ignore this e-mail; your password stays as it is.'),
+  };
+}

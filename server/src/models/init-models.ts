@@ -1,0 +1,33 @@
+import type { Sequelize } from 'sequelize';
+import { AuditEvent } from './audit-event';
+import { Invitation } from './invitation';
+import { Membership } from './membership';
+import { PasswordReset } from './password-reset';
+import { Project } from './project';
+import { RefreshToken } from './refresh-token';
+import { SignInSession } from './sign-in-session';
+import { User } from './user';
+import { Workspace } from './workspace';
+
+/** Initialises every model on the instance and wires the associations. */
+export function initModels(sequelize: Sequelize): void {
+  for (const model of [User, Workspace, Membership, SignInSession, RefreshToken, PasswordReset, Invitation, AuditEvent, Project]) {
+    model.initModel(sequelize);
+  }
+  Workspace.hasMany(Membership, { foreignKey: 'workspaceId' });
+  Membership.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
+  User.hasMany(Membership, { foreignKey: 'userId' });
+  Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+  SignInSession.belongsTo(User, { foreignKey: 'userId' });
+  RefreshToken.belongsTo(SignInSession, { foreignKey: 'sessionId', as: 'session' });
+  PasswordReset.belongsTo(User, { foreignKey: 'userId' });
+  Invitation.belongsTo(Workspace, { foreignKey: 'workspaceId', as: 'workspace' });
+  Invitation.belongsTo(User, { foreignKey: 'invitedById', as: 'invitedBy' });
+  Invitation.belongsTo(User, { foreignKey: 'acceptedById', as: 'acceptedBy' });
+  AuditEvent.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
+  AuditEvent.belongsTo(Workspace, { foreignKey: 'workspaceId' });
+  Project.belongsTo(Workspace, { foreignKey: 'workspaceId' });
+  Project.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+}
+
+export { AuditEvent, Invitation, Membership, PasswordReset, Project, RefreshToken, SignInSession, User, Workspace };

@@ -1,0 +1,31 @@
+import express, { Router } from 'express';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+
+/**
+ * The built apps: admin at /admin/, designer at /. Unknown paths inside an app answer its
+ * index.html so client-side routes survive a reload. Hashed assets are cached for a year.
+ */
+export function serveApps(distDir: string): Router {
+  const router = Router();
+  const mount = (prefix: string, folder: string, name: string) => {
+    const root = path.join(distDir, folder, 'browser');
+    const index = path.join(root, 'index.html');
+    router.use(prefix, express.static(root, {
+      index: false,
+      setHeaders: (res, file) => { res.setHeader('Cache-Control', /\.[0-9a-z]{8,}\.(js|css|woff2?)$/i.test(file) ? 'public, max-age=31536000, immutable' : 'no-cache'); },
+    }));
+    router.get(prefix === '/' ? '/*splat' : `${prefix}{/*splat}`, (req, res, next) => {
+      if (prefix === '/' && (req.path.startsWith('/api/') || req.path.startsWith('/admin'))) return next();
+      if (!existsSync(index)) {
+        res.status(503).type('text/plain').send(`The ${name} app has not been built yet. Run "npm start" (it builds the apps) or "npm run build".`);
+        return;
+      }
+      res.setHeader('Cache-Control', 'no-cache');
+      res.sendFile(index);
+    });
+  };
+  mount('/admin', 'admin', 'admin');
+  mount('/', 'designer', 'designer');
+  return router;
+}
