@@ -3,3 +3,4 @@ export * from './roles';
 export * from './accounts';
 export * from './members';
 export * from './projects';
+export * from './part-document';

@@ -1,0 +1,22 @@
+// The mechanics engine's public surface. Nothing else under engine/ is imported from outside.
+export { analyzePart, analyzeValidatedPart, type AnalyzeOptions } from './report/analyze-part';
+export type { SpinReport } from './report/spin-report';
+export { STANDARD_NOTES } from './report/report-notes';
+export { validatePartDocument, type PartValidation } from './part/validate-part-document';
+export { EngineInputError, type InputIssue } from './part/engine-input-error';
+export { partMassProperties, type PartMassProperties, type PartResolvers, type ResolvedMaterial, type ResolvedMesh } from './part/part-mass-properties';
+export type { Body } from './composition/body';
+export { principalAxes, EQUAL_MOMENTS_ANALYTIC, EQUAL_MOMENTS_MESH, type PrincipalAxes } from './principal/principal-axes';
+export { jacobiEigen } from './principal/jacobi';
+export { assessSpin, type SpinAssessment, type AxisRole } from './spin/assess-spin';
+export { DEFAULT_VERDICT_THRESHOLDS, type Verdict, type VerdictThresholds } from './spin/verdict-thresholds';
+export { intermediateGrowthRate } from './spin/growth-rate';
+export { wobbleFrequency } from './spin/wobble-frequency';
+export { momentAboutLine } from './trade/moment-about-line';
+export { tradeFigures, radiusOfGyration, SWINGWEIGHT_DISTANCE, BAT_PIVOT_DISTANCE, type TradeFigures, type GripFrame } from './trade/trade-figures';
+export type { CategoryCheck } from './checks/category-check';
+export { DISPLAY_UNITS, toDisplay, fromDisplay, convertUnits, type Quantity, type DisplayUnit } from './units/display-units';
+export { completeEllipticK } from './motion/complete-elliptic-k';
+export { jacobiSnCnDn } from './motion/jacobi-elliptic';
+export { exactTorqueFree, type ExactTorqueFree } from './motion/exact-torque-free';
+export type { MeshProblem, MeshProblemCode } from './mesh/mesh-problem';

@@ -1,0 +1,16 @@
+import type { Body } from '../composition/body';
+
+/**
+ * Moment of inertia (kg·m²) about the line through `point` (m) with unit direction `dir`, part frame:
+ * I_line = uᵀ I_c u + m·|r⊥|², r = c − point, r⊥ its part perpendicular to u (parallel-axis theorem;
+ * e.g. Goldstein, Classical Mechanics, §5.3). Precondition: |dir| = 1.
+ */
+export function momentAboutLine(body: Body, point: ArrayLike<number>, dir: ArrayLike<number>): number {
+  const j = body.inertia;
+  const ux = dir[0], uy = dir[1], uz = dir[2];
+  const own = ux * (j[0] * ux + j[1] * uy + j[2] * uz) + uy * (j[3] * ux + j[4] * uy + j[5] * uz) + uz * (j[6] * ux + j[7] * uy + j[8] * uz);
+  const rx = body.center[0] - point[0], ry = body.center[1] - point[1], rz = body.center[2] - point[2];
+  const along = rx * ux + ry * uy + rz * uz;
+  const perp2 = Math.max(0, rx * rx + ry * ry + rz * rz - along * along);
+  return own + body.mass * perp2;
+}
