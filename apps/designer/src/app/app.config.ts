@@ -1,0 +1,23 @@
+import { provideHttpClient, withFetch, withInterceptors } from '@angular/common/http';
+import {
+  ApplicationConfig,
+  inject,
+  provideAppInitializer,
+  provideBrowserGlobalErrorListeners,
+  provideZonelessChangeDetection,
+} from '@angular/core';
+import { provideRouter, withComponentInputBinding } from '@angular/router';
+import { AuthApi, authInterceptor, errorInterceptor } from '@tumblewise/api-client';
+import { routes } from './app.routes';
+
+/** Providers of the designer app. */
+export const appConfig: ApplicationConfig = {
+  providers: [
+    provideBrowserGlobalErrorListeners(),
+    provideZonelessChangeDetection(),
+    provideRouter(routes, withComponentInputBinding()),
+    provideHttpClient(withFetch(), withInterceptors([authInterceptor, errorInterceptor])),
+    // Restore the session from the refresh cookie before the first route is resolved.
+    provideAppInitializer(() => inject(AuthApi).restoreSession()),
+  ],
+};

@@ -1,0 +1,15 @@
+import { Routes } from '@angular/router';
+import { NotFound } from '@tumblewise/ui';
+import { redirectSignedIn } from './core/redirect-signed-in';
+import { requireSession } from './core/require-session';
+
+/** Routes of the designer app; the account screens are public, everything else needs a session. */
+export const routes: Routes = [
+  { path: '', pathMatch: 'full', title: 'Projects · Tumblewise', canActivate: [requireSession], loadComponent: () => import('./features/projects/projects').then((m) => m.Projects) },
+  { path: 'signin', title: 'Sign in · Tumblewise', loadComponent: () => import('./features/sign-in/sign-in').then((m) => m.SignIn) },
+  { path: 'signup', title: 'Create a workspace · Tumblewise', canActivate: [redirectSignedIn], loadComponent: () => import('./features/sign-up/sign-up').then((m) => m.SignUp) },
+  { path: 'forgot-password', title: 'Forgot password · Tumblewise', loadComponent: () => import('./features/forgot-password/forgot-password').then((m) => m.ForgotPassword) },
+  { path: 'reset-password', title: 'Choose a new password · Tumblewise', loadComponent: () => import('./features/reset-password/reset-password').then((m) => m.ResetPassword) },
+  { path: 'invitations/accept', title: 'Join a workspace · Tumblewise', loadComponent: () => import('./features/accept-invitation/accept-invitation').then((m) => m.AcceptInvitation) },
+  { path: '**', title: 'Not found · Tumblewise', component: NotFound },
+];

@@ -1,0 +1,16 @@
+/*
+ * Public surface of the typed API client: calls, auth state, interceptors and workspace context.
+ */
+export * from './api-base-url';
+export * from './return-to';
+export * from './errors/api-error';
+export * from './errors/error-interceptor';
+export * from './auth/auth-state';
+export * from './auth/auth-api';
+export * from './auth/auth-interceptor';
+export * from './auth/skip-refresh';
+export * from './workspace/workspace-context';
+export * from './members/members-api';
+export * from './invitations/invitations-api';
+export * from './audit/audit-api';
+export * from './projects/projects-api';
