@@ -4,6 +4,7 @@ const swc = ['@swc/jest', { jsc: { parser: { syntax: 'typescript' }, target: 'es
 const aliases = { '^@tumblewise/shared$': '<rootDir>/shared/src/index.ts' };
 
 module.exports = {
+  testTimeout: 30000,
   projects: [
     {
       displayName: 'shared',
@@ -20,10 +21,9 @@ module.exports = {
       testMatch: ['<rootDir>/server/**/*.spec.ts'],
       transform: { '^.+\\.ts$': swc },
       moduleNameMapper: aliases,
-      globalSetup: '<rootDir>/server/test-support/global-setup.ts',
-      globalTeardown: '<rootDir>/server/test-support/global-teardown.ts',
-      setupFiles: ['<rootDir>/server/test-support/env.ts'],
-      testTimeout: 30000,
+      globalSetup: '<rootDir>/server/src/test-support/global-setup.ts',
+      globalTeardown: '<rootDir>/server/src/test-support/global-teardown.ts',
+      setupFiles: ['<rootDir>/server/src/test-support/env.ts'],
     },
   ],
 };

@@ -42,7 +42,9 @@ export class MailCatcher {
     this.child = null;
     if (!child || child.exitCode !== null) return;
     await new Promise<void>((resolve) => {
-      child.once('exit', () => resolve());
+      // maildev waits for open SMTP connections on SIGTERM; do not wait for them for long.
+      const force = setTimeout(() => child.kill('SIGKILL'), 2000);
+      child.once('exit', () => { clearTimeout(force); resolve(); });
       child.kill('SIGTERM');
     });
   }

@@ -1,0 +1,119 @@
+import request from 'supertest';
+import { PERMISSIONS, ROLES, can, type Role } from '@tumblewise/shared';
+import { Invitation, Membership, User } from '../models/init-models';
+import { bearer, signUp, startTestApp, type TestApp } from '../test-support/test-app';
+
+/**
+ * The role and tenancy matrices, generated from the app's own route catalogue: every route the
+ * app declares is in it, so a new route cannot be left out of these checks.
+ */
+let t: TestApp;
+type Actor = { token: string; workspaceId: string };
+const tokens: Partial<Record<Role, Actor>> = {};
+let other: { workspaceId: string; memberId: string; invitationId: string };
+
+/** A valid body for each write route, so the tenancy checks reach the row lookup. */
+const VALID_BODIES: Record<string, object> = {
+  'patch /workspaces/:workspaceId/members/:memberId': { role: 'designer' },
+  'post /workspaces/:workspaceId/invitations': { email: 'matrix-invitee@example.test', role: 'designer' },
+  'post /workspaces/:workspaceId/projects': { name: 'Matrix project', category: 'bat' },
+};
+
+beforeAll(async () => {
+  t = await startTestApp();
+  const a = await signUp(t.app, { workspaceName: 'Tenant A' });
+  tokens.owner = { token: a.accessToken, workspaceId: a.workspace.id };
+  for (const role of ROLES.filter((r) => r !== 'owner')) {
+    const s = await signUp(t.app, { workspaceName: `Scratch ${role}` });
+    const user = await User.findByPk(s.user.id);
+    await Membership.create({ workspaceId: a.workspace.id, userId: user!.id, role });
+    tokens[role] = { token: s.accessToken, workspaceId: a.workspace.id };
+  }
+  const b = await signUp(t.app, { workspaceName: 'Tenant B' });
+  const bMember = await Membership.findOne({ where: { workspaceId: b.workspace.id } });
+  const inv = await request(t.app).post(`/api/v1/workspaces/${b.workspace.id}/invitations`).set(bearer(b.accessToken))
+    .send({ email: 'b-invitee@example.test', role: 'reviewer' }).expect(201);
+  other = { workspaceId: b.workspace.id, memberId: bMember!.id, invitationId: inv.body.id };
+  expect(await Invitation.count({ where: { id: other.invitationId } })).toBe(1);
+});
+afterAll(async () => { await t.close(); });
+
+const workspaceRoutes = () => t.ctx.catalogue.routes.filter((r) => r.path.startsWith('/workspaces/:workspaceId'));
+const key = (r: { method: string; path: string }) => `${r.method} ${r.path}`;
+const NOWHERE = '00000000-0000-4000-8000-000000000000';
+
+function fill(path: string, ids: Record<string, string>): string {
+  return '/api/v1' + path.replace(/:([A-Za-z]+)/g, (_m, name: string) => {
+    if (!(name in ids)) throw new Error(`the matrix has no sample id for :${name}; add one`);
+    return ids[name];
+  });
+}
+
+function call(method: string, url: string, token?: string, body?: object) {
+  const r = request(t.app)[method as 'get'](url);
+  if (token) r.set(bearer(token));
+  return body ? r.send(body) : r;
+}
+
+it('catalogues every workspace route with a permission that exists', () => {
+  const routes = workspaceRoutes();
+  expect(routes.length).toBeGreaterThanOrEqual(9);
+  for (const r of routes) {
+    expect(r.access.kind).toBe('workspace');
+    if (r.access.kind === 'workspace') expect(Object.keys(PERMISSIONS)).toContain(r.access.permission);
+  }
+});
+
+describe('role matrix: each role × each workspace route → allowed or 403', () => {
+  it.each([...ROLES])('%s', async (role) => {
+    const actor = tokens[role]!;
+    for (const route of workspaceRoutes()) {
+      if (route.access.kind !== 'workspace') continue;
+      // Child ids that do not exist: an allowed role reaches the lookup (404) or validation (400).
+      const url = fill(route.path, { workspaceId: actor.workspaceId, memberId: NOWHERE, invitationId: NOWHERE });
+      const res = await call(route.method, url, actor.token, route.method === 'get' || route.method === 'delete' ? undefined : {});
+      const allowed = can(role, route.access.permission);
+      if (allowed) expect({ route: key(route), status: res.status }).not.toEqual({ route: key(route), status: 403 });
+      else expect({ route: key(route), status: res.status, code: res.body.error?.code }).toEqual({ route: key(route), status: 403, code: 'forbidden' });
+      expect(res.status).not.toBe(401);
+    }
+  });
+});
+
+describe('tenancy matrix', () => {
+  it('answers 404 for every route called with another workspace’s id', async () => {
+    const owner = tokens.owner!;
+    for (const route of workspaceRoutes()) {
+      const url = fill(route.path, { workspaceId: other.workspaceId, memberId: other.memberId, invitationId: other.invitationId });
+      const res = await call(route.method, url, owner.token, VALID_BODIES[key(route)]);
+      expect({ route: key(route), status: res.status }).toEqual({ route: key(route), status: 404 });
+    }
+  });
+
+  it('answers 404 for every row id of another workspace used under one’s own workspace', async () => {
+    const owner = tokens.owner!;
+    for (const route of workspaceRoutes().filter((r) => /:(?!workspaceId)\w+/.test(r.path))) {
+      const url = fill(route.path, { workspaceId: owner.workspaceId, memberId: other.memberId, invitationId: other.invitationId });
+      const res = await call(route.method, url, owner.token, VALID_BODIES[key(route)]);
+      expect({ route: key(route), status: res.status }).toEqual({ route: key(route), status: 404 });
+    }
+    // Nothing of B changed.
+    expect(await Membership.count({ where: { id: other.memberId, role: 'owner' } })).toBe(1);
+    expect((await Invitation.findByPk(other.invitationId))!.status).toBe('pending');
+  });
+
+  it('answers 401 for every workspace route without a token', async () => {
+    for (const route of workspaceRoutes()) {
+      const url = fill(route.path, { workspaceId: other.workspaceId, memberId: other.memberId, invitationId: other.invitationId });
+      const res = await call(route.method, url, undefined, VALID_BODIES[key(route)]);
+      expect({ route: key(route), status: res.status }).toEqual({ route: key(route), status: 401 });
+    }
+  });
+
+  it('answers 401 for the signed-in routes outside workspaces without a token', async () => {
+    for (const route of t.ctx.catalogue.routes.filter((r) => r.access.kind === 'user' || r.access.kind === 'operator')) {
+      const res = await call(route.method, fill(route.path, {}), undefined);
+      expect({ route: key(route), status: res.status }).toEqual({ route: key(route), status: 401 });
+    }
+  });
+});
