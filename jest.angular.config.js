@@ -1,0 +1,39 @@
+// Jest projects for the Angular code: both apps and the libraries, in jsdom, zoneless.
+// Run with: npx jest -c jest.angular.config.js
+const { createCjsPreset } = require('jest-preset-angular/presets');
+
+const aliases = {
+  '^@tumblewise/shared$': '<rootDir>/shared/src/index.ts',
+  '^@tumblewise/api-client$': '<rootDir>/libs/api-client/src/public-api.ts',
+  '^@tumblewise/ui$': '<rootDir>/libs/ui/src/public-api.ts',
+  '^@tumblewise/viewer$': '<rootDir>/libs/viewer/src/public-api.ts',
+  '^three$': 'three/build/three.module.js',
+};
+
+/** One jest project per app or library folder, each with its own tsconfig.spec.json and set-up file. */
+function angularProject(displayName, folder) {
+  const preset = createCjsPreset({
+    tsconfig: `<rootDir>/${folder}/tsconfig.spec.json`,
+    testEnvironment: 'jest-preset-angular/environments/jest-jsdom-env',
+  });
+  return {
+    ...preset,
+    displayName,
+    rootDir: __dirname,
+    roots: [`<rootDir>/${folder}`],
+    testMatch: [`<rootDir>/${folder}/**/*.spec.ts`],
+    setupFilesAfterEnv: [`<rootDir>/${folder}/src/test-setup.ts`],
+    moduleNameMapper: aliases,
+    // three ships ESM only: let the preset's transformer process it.
+    transformIgnorePatterns: ['node_modules/(?!(.*\\.mjs$|three/|@angular/common/locales/.*\\.js$))'],
+  };
+}
+
+module.exports = {
+  projects: [
+    angularProject('designer', 'apps/designer'),
+    angularProject('admin', 'apps/admin'),
+    angularProject('ui', 'libs/ui'),
+    angularProject('api-client', 'libs/api-client'),
+  ],
+};
