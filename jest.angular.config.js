@@ -4,6 +4,7 @@ const { createCjsPreset } = require('jest-preset-angular/presets');
 
 const aliases = {
   '^@tumblewise/shared$': '<rootDir>/shared/src/index.ts',
+  '^@tumblewise/engine$': '<rootDir>/shared/src/engine/public-api.ts',
   '^@tumblewise/api-client$': '<rootDir>/libs/api-client/src/public-api.ts',
   '^@tumblewise/ui$': '<rootDir>/libs/ui/src/public-api.ts',
   '^@tumblewise/viewer$': '<rootDir>/libs/viewer/src/public-api.ts',
