@@ -22,7 +22,7 @@ import {
 import { AuditApi, MembersApi, toApiError, WorkspaceContext } from '@tumblewise/api-client';
 import { AUDIT_ACTIONS, type AuditEvent } from '@tumblewise/shared';
 import { EmptyState, ErrorBanner, FieldErrorPipe, LoadingState, PageHeader } from '@tumblewise/ui';
-import { debounceTime, distinctUntilChanged, map } from 'rxjs';
+import { debounceTime, distinctUntilChanged, map, tap } from 'rxjs';
 import { actionLabel } from './action-labels';
 import { rangeIsReversed, toAuditQuery, type AuditFilterValue } from './audit-filter';
 
@@ -82,16 +82,18 @@ export class Audit {
     { action: '', actor: '', from: '', to: '' },
     { validators: [rangeInOrder] },
   );
+  protected readonly page = signal(1);
+  protected readonly pageSize = signal(25);
+  /** The filter once typing has settled; a new filter starts again from the first page. */
   private readonly filterValue = toSignal(
     this.filterForm.valueChanges.pipe(
       debounceTime(250),
       map(() => this.filterForm.getRawValue()),
       distinctUntilChanged((a, b) => JSON.stringify(a) === JSON.stringify(b)),
+      tap(() => this.page.set(1)),
     ),
     { initialValue: this.filterForm.getRawValue() },
   );
-  protected readonly page = signal(1);
-  protected readonly pageSize = signal(25);
 
   /** Members of the workspace, for the actor filter. */
   protected readonly members = rxResource({
@@ -112,11 +114,6 @@ export class Audit {
     return error ? toApiError(error).message : null;
   });
   protected readonly hasFilter = computed(() => Object.values(this.filterValue()).some(Boolean));
-
-  constructor() {
-    // A new filter starts again from the first page.
-    this.filterForm.valueChanges.subscribe(() => this.page.set(1));
-  }
 
   /** Moves to the page the paginator asks for. */
   protected changePage(event: PageEvent): void {
