@@ -1,7 +1,10 @@
 // Jest projects for the Node-side suites: the isomorphic shared code and the server.
 // The Angular suites use jest.angular.config.js, the browser flows jest.e2e.config.js.
 const swc = ['@swc/jest', { jsc: { parser: { syntax: 'typescript' }, target: 'es2022' }, module: { type: 'commonjs' } }];
-const aliases = { '^@tumblewise/shared$': '<rootDir>/shared/src/index.ts' };
+const aliases = {
+  '^@tumblewise/shared$': '<rootDir>/shared/src/index.ts',
+  '^@tumblewise/engine$': '<rootDir>/shared/src/engine/public-api.ts',
+};
 
 module.exports = {
   testTimeout: 30000,

@@ -11,8 +11,11 @@ import { AttemptLimits } from './http/attempt-limits';
 import { Mailer } from './mail/mailer';
 
 /** Wires the collaborators of one server process from its configuration. */
-export function createContext(config: Config): AppContext {
-  const logger = pino({ level: config.logLevel, redact: ['password', '*.password', 'token', '*.token', 'accessToken', '*.accessToken'] });
+export function createContext(config: Config, options: { logStream?: pino.DestinationStream } = {}): AppContext {
+  const logger = pino(
+    { level: config.logLevel, redact: ['password', '*.password', 'token', '*.token', 'accessToken', '*.accessToken'] },
+    options.logStream ?? pino.destination(1),
+  );
   const sequelize = createDatabase(config.databaseUrl);
   return {
     config,

@@ -49,7 +49,7 @@ it('shares the sign-in attempt limit between the instances', async () => {
 
 it('a sign-out on one instance ends the session on the other', async () => {
   const res = await post(a, '/auth/signup', { workspaceName: 'Two Lab', name: 'T', email: 'two@example.test', password: 'right-password-1' });
-  const { accessToken } = await res.json();
+  const { accessToken } = (await res.json()) as { accessToken: string };
   const cookie = cookieOf(res);
   expect((await fetch(`${b}/me`, { headers: { authorization: `Bearer ${accessToken}` } })).status).toBe(200);
   expect((await post(b, '/auth/signout', {}, { cookie, authorization: `Bearer ${accessToken}` })).status).toBe(204);
@@ -64,6 +64,6 @@ it('a refresh token rotated on one instance is recognised as reused on the other
   expect(rotated.status).toBe(200);
   const reuse = await post(b, '/auth/refresh', {}, { cookie: first });
   expect(reuse.status).toBe(401);
-  expect((await reuse.json()).error.code).toBe('refresh_reused');
+  expect(((await reuse.json()) as { error: { code: string } }).error.code).toBe('refresh_reused');
   expect((await post(a, '/auth/refresh', {}, { cookie: cookieOf(rotated) })).status).toBe(401);
 });

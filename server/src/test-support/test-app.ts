@@ -32,10 +32,10 @@ export async function cloneTemplateDatabase(): Promise<{ database: string; url: 
 }
 
 /** A full app on its own cloned database, with the test services' addresses. */
-export async function startTestApp(env: Record<string, string> = {}): Promise<TestApp> {
+export async function startTestApp(env: Record<string, string> = {}, options: Parameters<typeof createContext>[1] = {}): Promise<TestApp> {
   const { database, url } = await cloneTemplateDatabase();
   const config = loadConfig({ ...process.env, DATABASE_URL: url, ...env });
-  const ctx = createContext(config);
+  const ctx = createContext(config, options);
   const app = createApp(ctx);
   return { ctx, app, database, databaseUrl: url, close: () => closeContext(ctx) };
 }

@@ -3,7 +3,7 @@
 // is one JSON line on stderr ({ file, error: { code, message, field?, issues? } }) and the exit code
 // is 2 if any file failed. Node-only by design (the one file under shared/src that may be).
 import { readFileSync } from 'node:fs';
-import { analyzePart, EngineInputError } from '../index';
+import { analyzePart, EngineInputError } from '../engine/public-api';
 
 function fail(file: string, code: string, message: string, issues?: { path: string; message: string }[]): void {
   const field = issues?.[0]?.path;
