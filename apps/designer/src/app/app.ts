@@ -3,6 +3,13 @@ import { Router, RouterOutlet } from '@angular/router';
 import { AuthApi, AuthState, WorkspaceContext } from '@tumblewise/api-client';
 import { AppShell, type ShellLink } from '@tumblewise/ui';
 
+const ACCOUNT_PAGES = ['/signin', '/signup', '/forgot-password', '/reset-password', '/invitations/accept'];
+
+function isAccountPage(url: string): boolean {
+  const path = url.split(/[?#]/)[0];
+  return ACCOUNT_PAGES.includes(path);
+}
+
 /** Root of the designer app: the shell around the routed screen. */
 @Component({
   selector: 'tw-root',
@@ -25,11 +32,12 @@ export class App {
   );
 
   constructor() {
-    // When the session ends without the user asking (refresh refused), go to sign-in.
+    // When the session ends without the user asking (refresh refused) on a page that needs one,
+    // go to sign-in and come back afterwards. The account pages work signed out and stay.
     effect(() => {
       const signedIn = this.auth.signedIn();
-      if (this.wasSignedIn && !signedIn) {
-        const url = this.router.url;
+      const url = this.router.url;
+      if (this.wasSignedIn && !signedIn && !isAccountPage(url)) {
         void this.router.navigate(['/signin'], { queryParams: url && url !== '/' ? { returnTo: url } : {} });
       }
       this.wasSignedIn = signedIn;
