@@ -20,3 +20,6 @@ export { completeEllipticK } from './motion/complete-elliptic-k';
 export { jacobiSnCnDn } from './motion/jacobi-elliptic';
 export { exactTorqueFree, type ExactTorqueFree } from './motion/exact-torque-free';
 export type { MeshProblem, MeshProblemCode } from './mesh/mesh-problem';
+export { simulate, simulateInputSchema, MAX_SIMULATION_SAMPLES, type SimulateInput, type SimulationResult } from './motion/simulate';
+export { splittingStep, splittingStep4, type RigidState } from './motion/lie-poisson-splitting';
+export { intermediateFlipTime, flipTimeNearSeparatrix } from './spin/flip-time';

@@ -6,8 +6,10 @@ const as = new Float64Array(MAX_STEPS + 1);
 
 /**
  * Jacobi elliptic functions sn, cn, dn of argument u and parameter m = k² (0 ≤ m ≤ 1), written to
- * out = [sn, cn, dn]. Descending AGM (Landen) scheme, DLMF 22.20(ii), with dn = cos φ0 / cos(φ1 − φ0)
- * (A&S 16.4). `mc` = 1 − m may be passed for accuracy near m = 1. The argument is first reduced
+ * out = [sn, cn, dn]. Descending AGM (Landen) scheme for the amplitude φ, DLMF 22.20(ii); then
+ * sn = sin φ, cn = cos φ and dn = √(cn² + mc·sn²) (= √(1 − m sn²), DLMF 22.6.1, written as a sum of
+ * positive terms: A&S 16.4's cos φ0 / cos(φ1 − φ0) is 0/0 at u = K). `mc` = 1 − m may be passed for
+ * accuracy near m = 1. The argument is first reduced
  * modulo the real period 4K so large u keeps its accuracy. m = 0 and m = 1 use the closed forms
  * (sin, cos, 1) and (tanh, sech, sech).
  */
@@ -41,14 +43,10 @@ export function jacobiSnCnDn(out: Float64Array, u: number, m: number, mc = 1 - m
     cs[n] = c;
   }
   let phi = Math.pow(2, n) * a * u;
-  let prev = phi;
-  for (let j = n; j >= 1; j--) {
-    prev = phi;
-    phi = 0.5 * (phi + Math.asin((cs[j] / as[j]) * Math.sin(phi)));
-  }
+  for (let j = n; j >= 1; j--) phi = 0.5 * (phi + Math.asin((cs[j] / as[j]) * Math.sin(phi)));
   const sn = Math.sin(phi), cn = Math.cos(phi);
   out[0] = sn;
   out[1] = cn;
-  out[2] = n === 0 ? Math.sqrt(1 - m * sn * sn) : cn / Math.cos(prev - phi);
+  out[2] = Math.sqrt(cn * cn + mc * sn * sn);
   return out;
 }
