@@ -138,6 +138,17 @@ describe('Members', () => {
     expect(await after[2].getValueText()).toBe('Owner');
   });
 
+  it('reloads my own memberships after I change my own role', async () => {
+    const selects = await loader.getAllHarnesses(MatSelectHarness.with({ selector: '[data-testid="member-role"]' }));
+    await selects[2].open(); // Mira, the signed-in owner
+    await selects[2].clickOptions({ text: 'Admin' });
+    backend.expectOne(`${MEMBERS_URL}/${TEAM[0].id}`).flush({ ...TEAM[0], role: 'admin' });
+    const me = backend.expectOne('/api/v1/me');
+    me.flush({ user: { id: TEAM[0].userId, email: TEAM[0].email, name: TEAM[0].name, isOperator: false, createdAt: WORKSPACE.createdAt }, memberships: [{ workspace: WORKSPACE, role: 'admin' }] });
+    await fixture.whenStable();
+    expect(TestBed.inject(AuthState).memberships()[0].role).toBe('admin');
+  });
+
   it("keeps the last owner's row when the server refuses the removal", async () => {
     const removeButtons = host.querySelectorAll<HTMLButtonElement>('[data-testid="member-remove"]');
     removeButtons[2].click(); // Mira, the owner

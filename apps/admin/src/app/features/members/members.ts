@@ -21,7 +21,7 @@ import {
   MatTableDataSource,
 } from '@angular/material/table';
 import { MatTooltip } from '@angular/material/tooltip';
-import { AuthState, MembersApi, toApiError, WorkspaceContext } from '@tumblewise/api-client';
+import { AuthApi, AuthState, MembersApi, toApiError, WorkspaceContext } from '@tumblewise/api-client';
 import { can, canAssignRole, ROLES, type Member, type Role } from '@tumblewise/shared';
 import { Confirmation, EmptyState, ErrorBanner, LoadingState, PageHeader, ROLE_LABELS } from '@tumblewise/ui';
 import { filter, switchMap } from 'rxjs';
@@ -64,6 +64,7 @@ import { memberMatchesFilter, memberSortValue } from './member-table';
 export class Members {
   protected readonly workspace = inject(WorkspaceContext);
   private readonly auth = inject(AuthState);
+  private readonly authApi = inject(AuthApi);
   private readonly membersApi = inject(MembersApi);
   private readonly confirmation = inject(Confirmation);
 
@@ -132,6 +133,7 @@ export class Members {
       next: (updated) => {
         this.busyId.set(null);
         this.members.update((list) => list?.map((m) => (m.id === updated.id ? updated : m)));
+        this.reloadOwnMembershipsIfMine(updated);
       },
       error: (error: unknown) => {
         this.busyId.set(null);
@@ -150,7 +152,10 @@ export class Members {
     this.confirmation
       .ask({
         title: `Remove ${member.name}?`,
-        message: `${member.name} (${member.email}) loses access to ${this.workspace.workspace()?.name ?? 'this workspace'} at once. You can invite them again later.`,
+        message:
+          member.userId === this.myUserId()
+            ? `You lose access to ${this.workspace.workspace()?.name ?? 'this workspace'} at once. Only an owner or admin can invite you back.`
+            : `${member.name} (${member.email}) loses access to ${this.workspace.workspace()?.name ?? 'this workspace'} at once. You can invite them again later.`,
         confirmLabel: 'Remove',
         destructive: true,
       })
@@ -165,12 +170,18 @@ export class Members {
         next: () => {
           this.busyId.set(null);
           this.members.update((list) => list?.filter((m) => m.id !== member.id));
+          this.reloadOwnMembershipsIfMine(member);
         },
         error: (error: unknown) => {
           this.busyId.set(null);
           this.actionError.set(toApiError(error).message);
         },
       });
+  }
+
+  /** After changing one's own membership, the role held here changes too: reload it. */
+  private reloadOwnMembershipsIfMine(member: Member): void {
+    if (member.userId === this.myUserId()) this.authApi.loadMe().subscribe({ error: () => undefined });
   }
 
   /** A role as written on screen. */
