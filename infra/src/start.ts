@@ -1,3 +1,4 @@
+import { startServer } from '../../server/src/main';
 import { DEMO_PASSWORD, DEMO_USERS, DEMO_WORKSPACE } from '../../server/src/seed/demo-seed';
 import { buildAppIfStale } from './app-build';
 import { startLocalServices } from './local-services';
@@ -21,7 +22,6 @@ async function main(): Promise<void> {
       : '[postgres] created a new database cluster');
     for (const app of ['designer', 'admin'] as const) buildAppIfStale(app);
     Object.assign(process.env, services.env, { PORT: String(port) });
-    const { startServer } = await import('../../server/src/main');
     const { ctx, stop, applied, seeded } = await startServer({ seedDemo: true });
     const url = ctx.config.publicUrl;
     console.log(`
