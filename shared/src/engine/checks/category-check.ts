@@ -37,7 +37,10 @@ export interface CheckContext {
   division: 'men' | 'women';
 }
 
-/** A range check: pass inside [min, max], fail outside, not-evaluated without a value. */
+/** Relative slack at a limit so rounding (0.7 + 0.1 < 0.8) does not fail a part that sits exactly on it. */
+const LIMIT_SLACK = 1e-9;
+
+/** A range check: pass inside [min, max] (within LIMIT_SLACK), fail outside, not-evaluated without a value. */
 export function rangeCheck(
   base: Omit<CategoryCheck, 'status' | 'indicative' | 'value' | 'limit'>,
   value: number | null,
@@ -45,7 +48,7 @@ export function rangeCheck(
   missing = 'needs a grip frame (grip.point, grip.axis, grip.faceNormal)',
 ): CategoryCheck {
   if (value === null || !Number.isFinite(value)) return { ...base, value: null, limit, status: 'not-evaluated', indicative: true, note: missing };
-  const ok = (limit.min === undefined || value >= limit.min) && (limit.max === undefined || value <= limit.max);
+  const ok = (limit.min === undefined || value >= limit.min * (1 - LIMIT_SLACK)) && (limit.max === undefined || value <= limit.max * (1 + LIMIT_SLACK));
   return { ...base, value, limit, status: ok ? 'pass' : 'fail', indicative: true };
 }
 
