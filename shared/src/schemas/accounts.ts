@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { emailSchema, idSchema, passwordSchema, personNameSchema, timestampSchema, tokenSchema, workspaceNameSchema } from './common';
-import { roleSchema } from './roles';
+import { roleSchema } from './role-schema';
 
 export const signupBodySchema = z.object({
   workspaceName: workspaceNameSchema,

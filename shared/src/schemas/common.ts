@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import type { ErrorBody } from './error-body';
 
 /** Row ids are UUIDs everywhere. */
 export const idSchema = z.uuid({ message: 'must be an id' });
@@ -55,15 +56,14 @@ export const pageQuerySchema = z.object({
   pageSize: z.coerce.number({ message: 'must be a number' }).int().min(1).max(200).default(25),
 });
 
-/** The JSON error body every failing request answers with. */
+/** The JSON error body every failing request answers with (for the API description). */
 export const errorBodySchema = z.object({
   error: z.object({
     code: z.string(),
     message: z.string(),
     field: z.string().optional(),
   }),
-});
-export type ErrorBody = z.infer<typeof errorBodySchema>;
+}) satisfies z.ZodType<ErrorBody>;
 
 /** A page of rows. */
 export interface Page<T> {

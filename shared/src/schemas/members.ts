@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { emailSchema, idSchema, pageQuerySchema, timestampSchema, tokenSchema, personNameSchema, passwordSchema } from './common';
-import { roleSchema } from './roles';
+import { roleSchema } from './role-schema';
 
 export const memberSchema = z.object({
   id: idSchema.describe('membership id'),

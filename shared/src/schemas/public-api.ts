@@ -1,5 +1,7 @@
 export * from './common';
 export * from './roles';
+export * from './role-schema';
+export * from './error-body';
 export * from './accounts';
 export * from './members';
 export * from './projects';

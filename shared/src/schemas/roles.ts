@@ -1,9 +1,7 @@
-import { z } from 'zod';
-
 /** The roles a member holds inside a workspace, most powerful first. */
+// No zod here: the apps' first screen imports this, and zod belongs in the lazy chunks.
 export const ROLES = ['owner', 'admin', 'designer', 'reviewer'] as const;
-export const roleSchema = z.enum(ROLES, { message: 'must be one of owner, admin, designer, reviewer' });
-export type Role = z.infer<typeof roleSchema>;
+export type Role = (typeof ROLES)[number];
 
 /**
  * What a role may do. The server checks these on every workspace route; the apps use the same

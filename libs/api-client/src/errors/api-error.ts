@@ -1,5 +1,5 @@
 import { HttpErrorResponse } from '@angular/common/http';
-import { errorBodySchema } from '@tumblewise/shared';
+import { isErrorBody } from '@tumblewise/shared';
 
 /** A failed API call, as every screen sees it: status, machine code, readable message, and the field at fault. */
 export class ApiError extends Error {
@@ -24,9 +24,8 @@ export class ApiError extends Error {
       return new ApiError(0, 'network', 'The server could not be reached. Check your connection and try again.');
     }
     const retryAfterSeconds = parseRetryAfter(response.headers?.get('Retry-After'));
-    const parsed = errorBodySchema.safeParse(response.error);
-    if (parsed.success) {
-      const { code, message, field } = parsed.data.error;
+    if (isErrorBody(response.error)) {
+      const { code, message, field } = response.error.error;
       return new ApiError(response.status, code, withRetryHint(message, response.status, retryAfterSeconds), field, retryAfterSeconds);
     }
     return new ApiError(
