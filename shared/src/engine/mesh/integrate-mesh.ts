@@ -13,20 +13,33 @@ import { createSolid, type Solid } from '../primitives/solid';
  * Input: `corners`, 9 numbers per triangle (x1 y1 z1 x2 … z3), the first `count` triangles, in the
  * mesh's own units; `scale` multiplies every coordinate (0.001 for an STL in millimetres).
  * Output: the solid in scaled units (m³, m, m⁵). The volume is negative for an inside-out mesh;
- * the caller decides (see validateMesh).
+ * the caller decides (see validateIndexedMesh). `reference` skips the mean pass when the caller
+ * already has the corner mean (parseStl computes it while reading).
  */
-export function integrateTriangleSoup(out: Solid = createSolid(), corners: ArrayLike<number>, count = Math.floor(corners.length / 9), scale = 1): Solid {
+export function integrateTriangleSoup(
+  out: Solid = createSolid(),
+  corners: ArrayLike<number>,
+  count = Math.floor(corners.length / 9),
+  scale = 1,
+  reference?: ArrayLike<number>,
+): Solid {
   let ox = 0, oy = 0, oz = 0;
   const n9 = count * 9;
-  for (let i = 0; i < n9; i += 3) {
-    ox += corners[i];
-    oy += corners[i + 1];
-    oz += corners[i + 2];
+  if (reference) {
+    ox = reference[0];
+    oy = reference[1];
+    oz = reference[2];
+  } else {
+    for (let i = 0; i < n9; i += 3) {
+      ox += corners[i];
+      oy += corners[i + 1];
+      oz += corners[i + 2];
+    }
+    const inv = count > 0 ? 1 / (3 * count) : 0;
+    ox *= inv;
+    oy *= inv;
+    oz *= inv;
   }
-  const inv = count > 0 ? 1 / (3 * count) : 0;
-  ox *= inv;
-  oy *= inv;
-  oz *= inv;
   let v6 = 0, rx = 0, ry = 0, rz = 0, xx = 0, yy = 0, zz = 0, xy = 0, yz = 0, xz = 0;
   for (let i = 0; i < n9; i += 9) {
     const x1 = corners[i] - ox, y1 = corners[i + 1] - oy, z1 = corners[i + 2] - oz;

@@ -154,3 +154,25 @@ describe('category checks (each indicative, naming its rule)', () => {
     expectRelClose(r.trade.pivot!.centreOfPercussion!, 0.1524 + r.trade.pivot!.moment / (r.mass * (r.trade.balancePoint! - 0.1524)), 1e-14);
   });
 });
+
+describe('mesh primitives in a part', () => {
+  const box = { vertices: [[0, 0, 0], [0.1, 0, 0], [0, 0.2, 0], [0.1, 0.2, 0], [0, 0, 0.3], [0.1, 0, 0.3], [0, 0.2, 0.3], [0.1, 0.2, 0.3]], triangles: [[0, 4, 6], [0, 6, 2], [1, 3, 7], [1, 7, 5], [0, 1, 5], [0, 5, 4], [2, 6, 7], [2, 7, 3], [0, 2, 3], [0, 3, 1], [4, 5, 7], [4, 7, 6]] };
+  it('an inline mesh box (in mm at scale 0.001 or in m) equals the box primitive', () => {
+    const prim = analyzePart({ primitives: [{ id: 'b', shape: 'box', size: [0.1, 0.2, 0.3], position: [0.05, 0.1, 0.15], density: 800 }], spin: { axis: [0, 0, 1], rate: 1 } });
+    const mm = { vertices: box.vertices.map((v) => v.map((x) => x * 1000)), triangles: box.triangles };
+    const mesh = analyzePart({ primitives: [{ id: 'm', shape: 'mesh', ...mm, scale: 0.001, density: 800 }], spin: { axis: [0, 0, 1], rate: 1 } });
+    expectRelClose(mesh.mass, prim.mass, 1e-13);
+    for (let i = 0; i < 3; i++) for (let j = 0; j < 3; j++) expectAbsClose(mesh.inertia[i][j], prim.inertia[i][j], 1e-13 * prim.inertia[2][2]);
+    expect(mesh.trade.length).toBeNull(); // no grip frame, no length along it
+  });
+  it('a meshId resolves through the caller; an open mesh is refused naming the field', () => {
+    const corners = Float32Array.from(box.triangles.flatMap((t) => t.flatMap((i) => box.vertices[i])));
+    const doc = { primitives: [{ id: 'm', shape: 'mesh', meshId: 'upload-1', density: 800 }], spin: { axis: [0, 0, 1], rate: 1 } };
+    const r = analyzePart(doc, { resolveMesh: (id) => (id === 'upload-1' ? { corners, triangleCount: 12 } : undefined) });
+    expectRelClose(r.mass, 0.006 * 800, 1e-6);
+    const open = thrown(() => analyzePart(doc, { resolveMesh: () => ({ corners: corners.subarray(0, 99), triangleCount: 11 }) }));
+    expect(open.kind).toBe('unanalysable');
+    expect(open.path).toBe('primitives[0].meshId');
+    expect(open.message).toMatch(/not closed/);
+  });
+});
