@@ -18,3 +18,4 @@ export * from './labels/role-labels';
 export * from './browser/page-navigation';
 export * from './forms/focus-first-invalid';
 export * from './not-found/not-found';
+export * from './overlay/labelled-overlay-container';

@@ -8,6 +8,7 @@ import {
 } from '@angular/core';
 import { provideRouter, withComponentInputBinding } from '@angular/router';
 import { AuthApi, authInterceptor, errorInterceptor } from '@tumblewise/api-client';
+import { provideLabelledOverlayContainer } from '@tumblewise/ui';
 import { routes } from './app.routes';
 
 /** Providers of the admin app. */
@@ -19,5 +20,6 @@ export const appConfig: ApplicationConfig = {
     provideHttpClient(withFetch(), withInterceptors([authInterceptor, errorInterceptor])),
     // Restore the session from the refresh cookie before the first route is resolved.
     provideAppInitializer(() => inject(AuthApi).restoreSession()),
+    provideLabelledOverlayContainer(),
   ],
 };
