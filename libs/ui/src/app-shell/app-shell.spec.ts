@@ -66,8 +66,8 @@ describe('AppShell', () => {
     await fixture.whenStable();
     const options = Array.from(document.querySelectorAll<HTMLElement>('[data-testid="workspace-option"]'));
     expect(options.map((o) => o.textContent)).toEqual([
-      expect.stringContaining('Harbour Street Gear Lab · owner'),
-      expect.stringContaining('Ridgeline Throwing Club · reviewer'),
+      expect.stringContaining('Harbour Street Gear Lab · Owner'),
+      expect.stringContaining('Ridgeline Throwing Club · Reviewer'),
     ]);
     expect(options.map((o) => o.getAttribute('aria-current'))).toEqual(['true', null]);
     options[1].click();

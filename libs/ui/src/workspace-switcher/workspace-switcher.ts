@@ -2,6 +2,7 @@ import { ChangeDetectionStrategy, Component, computed, input, output } from '@an
 import { MatButton } from '@angular/material/button';
 import { MatMenu, MatMenuItem, MatMenuTrigger } from '@angular/material/menu';
 import type { Membership } from '@tumblewise/shared';
+import { ROLE_LABELS } from '../labels/role-labels';
 
 /** The current workspace's name; a menu to change it when the user belongs to several. */
 @Component({
@@ -32,7 +33,7 @@ import type { Membership } from '@tumblewise/shared';
             (click)="workspaceSelected.emit(membership.workspace.id)"
           >
             <span class="material-icons" aria-hidden="true">{{ membership.workspace.id === currentId() ? 'check' : '' }}</span>
-            <span>{{ membership.workspace.name }} · {{ membership.role }}</span>
+            <span>{{ membership.workspace.name }} · {{ roleLabels[membership.role] }}</span>
           </button>
         }
       </mat-menu>
@@ -81,6 +82,7 @@ export class WorkspaceSwitcher {
   /** Emits the id of the workspace the user picked. */
   readonly workspaceSelected = output<string>();
 
+  protected readonly roleLabels = ROLE_LABELS;
   protected readonly current = computed(
     () => this.memberships().find((m) => m.workspace.id === this.currentId()) ?? this.memberships()[0] ?? null,
   );
