@@ -8,6 +8,7 @@ import type { ApiCatalogue } from './http/api-catalogue';
 import type { AttemptLimits } from './http/attempt-limits';
 import type { Mailer } from './mail/mailer';
 import type { PaymentProvider } from './billing/payment-provider';
+import type { ComputePool } from './compute/compute-pool';
 
 /** The long-lived collaborators of one server process, built once in `createContext`. */
 export interface AppContext {
@@ -20,5 +21,6 @@ export interface AppContext {
   sessions: SignInSessions;
   limits: AttemptLimits;
   payment: PaymentProvider;
+  compute: ComputePool;
   catalogue: ApiCatalogue;
 }

@@ -5,6 +5,7 @@ import { pinoHttp } from 'pino-http';
 import type { AppContext } from './app-context';
 import { authRoutes } from './accounts/auth-routes';
 import { meRoutes } from './accounts/me-routes';
+import { analysisRoutes } from './analysis/analysis-routes';
 import { auditRoutes } from './audit/audit-routes';
 import { healthRoutes } from './health/health-routes';
 import { apiNotFound, errorHandler } from './http/error-handler';
@@ -35,6 +36,7 @@ export function createApp(ctx: AppContext): express.Express {
   }));
 
   const api = Router();
+  api.use(['/analyze', '/simulate'], express.json({ limit: ctx.config.limits.partBody }));
   api.use(express.json({ limit: ctx.config.limits.jsonBody }));
   api.use(cookieParser());
   api.use(authenticate(ctx.tokens));
@@ -43,6 +45,7 @@ export function createApp(ctx: AppContext): express.Express {
   api.use('/auth', authRoutes(ctx));
   api.use('/invitations', invitationAcceptRoutes(ctx));
   api.use(meRoutes(ctx));
+  api.use(analysisRoutes(ctx));
 
   const workspace = Router({ mergeParams: true });
   workspace.use(workspaceGate);

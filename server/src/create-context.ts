@@ -4,6 +4,7 @@ import { Passwords } from './accounts/passwords';
 import { SignInSessions } from './accounts/sign-in-sessions';
 import type { AppContext } from './app-context';
 import { PaymentProvider } from './billing/payment-provider';
+import { ComputePool } from './compute/compute-pool';
 import type { Config } from './config/config';
 import { createDatabase } from './db/database';
 import { ApiCatalogue } from './http/api-catalogue';
@@ -27,6 +28,7 @@ export function createContext(config: Config, options: { logStream?: pino.Destin
     sessions: new SignInSessions(config.auth),
     limits: new AttemptLimits(sequelize, config.limits),
     payment: new PaymentProvider(config.payment),
+    compute: new ComputePool(),
     catalogue: new ApiCatalogue(),
   };
 }
@@ -34,5 +36,5 @@ export function createContext(config: Config, options: { logStream?: pino.Destin
 /** Closes pools and connections so the process can exit. */
 export async function closeContext(ctx: AppContext): Promise<void> {
   ctx.mailer.close();
-  await ctx.sequelize.close();
+  await Promise.all([ctx.sequelize.close(), ctx.compute.close()]);
 }

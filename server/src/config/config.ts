@@ -29,6 +29,8 @@ export interface Config {
   };
   limits: {
     jsonBody: string;
+    /** Body limit of part documents (inline meshes). */
+    partBody: string;
     signinPerWindow: number;
     signupPerWindow: number;
     passwordResetPerWindow: number;
@@ -98,6 +100,7 @@ export function loadConfig(env: Env = process.env): Config {
     },
     limits: {
       jsonBody: env.JSON_BODY_LIMIT ?? '1mb',
+      partBody: env.PART_BODY_LIMIT ?? '32mb',
       signinPerWindow: int(env, 'RATE_LIMIT_SIGNIN', 10, 1),
       signupPerWindow: int(env, 'RATE_LIMIT_SIGNUP', 10, 1),
       passwordResetPerWindow: int(env, 'RATE_LIMIT_PASSWORD_RESET', 5, 1),

@@ -29,6 +29,8 @@ export interface RouteSpec<B extends z.ZodType, Q extends z.ZodType, P extends z
   summary: string;
   access: Access;
   body?: B;
+  /** `engine`: the body schema only describes the route; the engine validates (with its own paths). */
+  bodyValidatedBy?: 'route' | 'engine';
   query?: Q;
   /** Parameters besides `workspaceId` (checked by the workspace gate). */
   params?: P;
@@ -67,7 +69,7 @@ export function apiRoute<B extends z.ZodType, Q extends z.ZodType, P extends z.Z
     checkAccess(spec.access, auth, req);
     const { workspaceId: _w, ...ownParams } = req.params as Record<string, string>;
     const input = {
-      body: spec.body ? parseOrThrow(spec.body, req.body, 'body') : undefined,
+      body: spec.body && spec.bodyValidatedBy !== 'engine' ? parseOrThrow(spec.body, req.body, 'body') : req.body,
       query: spec.query ? parseOrThrow(spec.query, req.query, 'query') : undefined,
       params: spec.params ? parseParams(spec.params, ownParams) : ownParams,
       auth,

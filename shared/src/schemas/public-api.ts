@@ -1,4 +1,5 @@
 export * from './common';
+export * from './json-path';
 export * from './roles';
 export * from './role-schema';
 export * from './error-body';
