@@ -30,3 +30,8 @@ export { weldVertices } from './mesh/weld-vertices';
 export { integrateTriangleSoup, integrateIndexedMesh } from './mesh/integrate-mesh';
 export type { Solid } from './primitives/solid';
 export { compoundPendulumMoment, trifilarMoment, STANDARD_GRAVITY } from './trade/measured-moments';
+export { runScatterStudy, scatterInputSchema, MAX_SCATTER_SAMPLES, type ScatterInput, type ScatterResult, type ScatterProgress, type Sensitivity } from './scatter/scatter-study';
+export type { Distribution } from './scatter/summarize';
+export { SeededRandom } from './scatter/seeded-random';
+export { DEFAULT_TOLERANCE } from './scatter/part-model';
+export { classifySpin, type SpinClass } from './spin/classify-spin';

@@ -1,11 +1,11 @@
 import type { PrincipalAxes } from '../principal/principal-axes';
 import { intermediateFlipTime } from './flip-time';
 import { intermediateGrowthRate } from './growth-rate';
-import { DEFAULT_VERDICT_THRESHOLDS, worseVerdict, type Verdict, type VerdictThresholds } from './verdict-thresholds';
+import { classifySpin, type AxisRole } from './classify-spin';
+import { DEFAULT_VERDICT_THRESHOLDS, type Verdict, type VerdictThresholds } from './verdict-thresholds';
 import { wobbleFrequency } from './wobble-frequency';
 
-/** Role of a principal axis. */
-export type AxisRole = 'major' | 'intermediate' | 'minor';
+export type { AxisRole };
 
 /** The spin part of a spin report (SI: rad/s, 1/s, s; angles in degrees). */
 export interface SpinAssessment {
@@ -40,7 +40,6 @@ export interface SpinInput {
   thresholds?: Partial<VerdictThresholds>;
 }
 
-const DEG = 180 / Math.PI;
 const fmt = (x: number, digits = 3) => Number(x.toPrecision(digits)).toString();
 const pct = (x: number) => `${fmt(100 * x, 3)} %`;
 
@@ -51,54 +50,24 @@ const pct = (x: number) => `${fmt(100 * x, 3)} %`;
  */
 export function assessSpin(input: SpinInput): { spin: SpinAssessment; notes: string[] } {
   const t = { ...DEFAULT_VERDICT_THRESHOLDS, ...input.thresholds };
-  const { moments: I, axes: P, equalPairs } = input.principal;
+  const I = input.principal.moments;
   const [i1, i2, i3] = [I[0], I[1], I[2]];
-  const a = input.axis;
-  const b = [0, 1, 2].map((r) => P[3 * r] * a[0] + P[3 * r + 1] * a[1] + P[3 * r + 2] * a[2]);
   const margins = { major: (i1 - i2) / i2, minor: (i2 - i3) / i2 };
   const notes: string[] = [];
-  const iSpin = i1 * b[0] * b[0] + i2 * b[1] * b[1] + i3 * b[2] * b[2];
-  const angleTo = (r: number) => Math.acos(Math.min(1, Math.abs(b[r]))) * DEG;
-  const angleToPlaneOf = (normalRow: number) => Math.asin(Math.min(1, Math.abs(b[normalRow]))) * DEG;
   const rate = input.rate;
-  let nearestAxis: AxisRole;
-  let misalignmentDeg: number;
-  let neutral = false;
-  if (equalPairs[0] && equalPairs[1]) {
-    nearestAxis = 'major';
-    misalignmentDeg = 0;
-  } else if (equalPairs[0]) {
-    const toPair = angleToPlaneOf(2), toMinor = angleTo(2);
-    neutral = toPair <= toMinor;
-    nearestAxis = neutral ? 'major' : 'minor';
-    misalignmentDeg = Math.min(toPair, toMinor);
-  } else if (equalPairs[1]) {
-    const toPair = angleToPlaneOf(0), toMajor = angleTo(0);
-    neutral = toPair < toMajor;
-    nearestAxis = neutral ? 'minor' : 'major';
-    misalignmentDeg = Math.min(toPair, toMajor);
-  } else {
-    const angles = [angleTo(0), angleTo(1), angleTo(2)];
-    const r = angles.indexOf(Math.min(...angles));
-    nearestAxis = (['major', 'intermediate', 'minor'] as const)[r];
-    misalignmentDeg = angles[r];
-  }
-
-  let verdict: Verdict;
+  const c = classifySpin(input.principal, input.axis, input.dissipative, t);
+  const { nearestAxis, misalignmentDeg, verdict, inBody: b } = c;
   let growthRate: number | null = null, eFoldingTime: number | null = null, flipTime: number | null = null, wobble: number | null = null;
   let explanation: string;
-  if (equalPairs[0] && equalPairs[1]) {
-    verdict = 'steady';
+  if (c.spherical) {
     wobble = 0;
     explanation = 'All three principal moments are equal (spherical inertia): every axis is a principal axis and spin about any of them stays as it is.';
-  } else if (neutral) {
-    verdict = t.neutralVerdict;
+  } else if (c.neutral) {
     wobble = 0;
     explanation =
       `The intended axis lies ${fmt(misalignmentDeg, 2)}° from the plane of two equal principal moments. ` +
       'Spin there is neutral: it does not flip over, but nothing pulls it back either, so a small disturbance makes the part drift slowly about its symmetry axis.';
   } else if (nearestAxis === 'intermediate') {
-    verdict = 'flip-prone';
     growthRate = intermediateGrowthRate(i1, i2, i3, rate);
     eFoldingTime = 1 / growthRate;
     const f = intermediateFlipTime(I, b, rate, input.misalignmentDeg);
@@ -114,11 +83,9 @@ export function assessSpin(input: SpinInput): { spin: SpinAssessment; notes: str
     const r = nearestAxis === 'major' ? 0 : 2;
     const [j, k] = r === 0 ? [i2, i3] : [i1, i2];
     wobble = wobbleFrequency(I[r], j, k, rate);
-    const closeness = Math.abs(iSpin - i2) / i2;
     const reasons: string[] = [];
-    if (closeness < t.watchMomentFraction) reasons.push(`the moment about it is within ${pct(closeness)} of the intermediate moment`);
+    if (c.closeness < t.watchMomentFraction) reasons.push(`the moment about it is within ${pct(c.closeness)} of the intermediate moment`);
     if (misalignmentDeg > t.watchMisalignmentDeg) reasons.push(`it is ${fmt(misalignmentDeg, 2)}° away from the ${nearestAxis} axis`);
-    verdict = reasons.length > 0 ? 'watch' : 'steady';
     explanation =
       `The intended axis is ${fmt(misalignmentDeg, 2)}° from the ${nearestAxis} principal axis, about which spin is steady: ` +
       `a small misalignment makes the part wobble at ${fmt(wobble / (2 * Math.PI))} Hz in its own frame without growing. ` +
@@ -126,7 +93,6 @@ export function assessSpin(input: SpinInput): { spin: SpinAssessment; notes: str
       (reasons.length > 0 ? ` Watch it: ${reasons.join(', and ')}; tolerances or a flexing part could change its behaviour.` : '');
   }
   if (input.dissipative && nearestAxis === 'minor') {
-    verdict = worseVerdict(verdict, t.dissipativeMinorVerdict);
     notes.push(
       'Major-axis rule: this part is marked dissipative (it flexes or carries loose or liquid content) and spins about its minor axis. ' +
         'Internal losses keep the angular momentum but drain energy, so over time the spin drifts to the major axis.',
