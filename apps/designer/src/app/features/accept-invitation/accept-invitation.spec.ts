@@ -36,7 +36,7 @@ describe('AcceptInvitation', () => {
 
   afterEach(() => backend.verify());
 
-  async function open(answer: InvitationPreview | { status: number; body: unknown }): Promise<void> {
+  async function open(answer: InvitationPreview | { status: number; body: object }): Promise<void> {
     fixture = TestBed.createComponent(AcceptInvitation);
     host = fixture.nativeElement;
     fixture.componentRef.setInput('token', TOKEN);
