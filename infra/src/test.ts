@@ -22,6 +22,10 @@ const steps: Step[] = [
   { name: 'type-check (shared, server, infra, test)', run: () => node([bin('typescript', 'bin/tsc'), '-p', 'tsconfig.json', '--noEmit']) },
   { name: 'type-check (designer app, templates)', run: () => node([bin('@angular/compiler-cli', 'bundles/src/bin/ngc.js'), '-p', 'apps/designer/tsconfig.app.json', '--noEmit']) },
   { name: 'type-check (admin app, templates)', run: () => node([bin('@angular/compiler-cli', 'bundles/src/bin/ngc.js'), '-p', 'apps/admin/tsconfig.app.json', '--noEmit']) },
+  {
+    name: 'type-check (Angular unit tests)',
+    run: () => ['apps/designer', 'apps/admin', 'libs/ui', 'libs/api-client'].every((dir) => node([bin('typescript', 'bin/tsc'), '-p', `${dir}/tsconfig.spec.json`, '--noEmit'])),
+  },
   { name: 'shared and server suites (jest)', run: () => jest('jest.config.js', extraArgs) },
   { name: 'Angular unit tests (jest, jsdom)', run: () => jest('jest.angular.config.js', extraArgs) },
   {

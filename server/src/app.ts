@@ -13,7 +13,11 @@ import { authenticate, workspaceGate } from './http/authenticate';
 import { invitationAcceptRoutes, invitationRoutes } from './invitations/invitation-routes';
 import { memberRoutes } from './members/member-routes';
 import { docsRoutes } from './openapi/docs-routes';
+import { materialRoutes } from './materials/material-routes';
+import { partRoutes } from './parts/part-routes';
 import { projectRoutes } from './projects/project-routes';
+import { reviewRoutes } from './reviews/review-routes';
+import { variantRoutes } from './variants/variant-routes';
 import { serveApps } from './static/serve-apps';
 
 /** Builds the Express app (no port): the API under /api/v1 and the two built apps. */
@@ -53,6 +57,10 @@ export function createApp(ctx: AppContext): express.Express {
   invitationRoutes(ctx, workspace);
   auditRoutes(ctx, workspace);
   projectRoutes(ctx, workspace);
+  materialRoutes(ctx, workspace);
+  partRoutes(ctx, workspace);
+  variantRoutes(ctx, workspace);
+  reviewRoutes(ctx, workspace);
   api.use('/workspaces/:workspaceId', workspace);
 
   api.use(apiNotFound);

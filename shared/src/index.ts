@@ -2,3 +2,4 @@
 // The mechanics engine has its own entry point, `@tumblewise/engine` (shared/src/engine/public-api.ts),
 // so the apps load it (and mathjs) only where they use it.
 export * from './schemas/public-api';
+export * from './compare/comparison';

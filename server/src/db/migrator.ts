@@ -4,6 +4,7 @@ import * as accounts from './migrations/20261201-0001-accounts';
 import * as invitations from './migrations/20261201-0002-invitations-audit';
 import * as projects from './migrations/20261201-0003-projects';
 import * as rateLimits from './migrations/20261201-0004-rate-limits';
+import * as designWorkspace from './migrations/20261201-0005-design-workspace';
 
 /** Migrations in the order they run. Migrations are history: never edit one that landed, add one. */
 const MIGRATIONS = [
@@ -11,6 +12,7 @@ const MIGRATIONS = [
   { name: '20261201-0002-invitations-audit', module: invitations },
   { name: '20261201-0003-projects', module: projects },
   { name: '20261201-0004-rate-limits', module: rateLimits },
+  { name: '20261201-0005-design-workspace', module: designWorkspace },
 ];
 
 export interface Migration {

@@ -1,23 +1,39 @@
 import request from 'supertest';
 import { PERMISSIONS, ROLES, can, type Role } from '@tumblewise/shared';
-import { Invitation, Membership, User } from '../models/init-models';
+import { Invitation, Material, Membership, Part, Project, User, Variant } from '../models/init-models';
 import { bearer, signUp, startTestApp, type TestApp } from '../test-support/test-app';
 
 /**
  * The role and tenancy matrices, generated from the app's own route catalogue: every route the
  * app declares is in it, so a new route cannot be left out of these checks.
  */
+const NOWHERE = '00000000-0000-4000-8000-000000000000';
 let t: TestApp;
 type Actor = { token: string; workspaceId: string };
 const tokens: Partial<Record<Role, Actor>> = {};
-let other: { workspaceId: string; memberId: string; invitationId: string };
+let other: Record<'workspaceId' | 'memberId' | 'invitationId' | 'materialId' | 'projectId' | 'partId' | 'variantId', string>;
 
 /** A valid body for each write route, so the tenancy checks reach the row lookup. */
 const VALID_BODIES: Record<string, object> = {
   'patch /workspaces/:workspaceId/members/:memberId': { role: 'designer' },
   'post /workspaces/:workspaceId/invitations': { email: 'matrix-invitee@example.test', role: 'designer' },
   'post /workspaces/:workspaceId/projects': { name: 'Matrix project', category: 'bat' },
+  'patch /workspaces/:workspaceId/projects/:projectId': { name: 'Renamed' },
+  'post /workspaces/:workspaceId/materials': { name: 'M', family: 'wood', density: 500, densityTolerance: 0.05, source: 'common practice' },
+  'patch /workspaces/:workspaceId/materials/:materialId': { name: 'Renamed' },
+  'post /workspaces/:workspaceId/projects/:projectId/parts': { name: 'Matrix part' },
+  'patch /workspaces/:workspaceId/parts/:partId': { draftVersion: 1, name: 'Renamed' },
+  'post /workspaces/:workspaceId/parts/:partId/variants': { document: { primitives: [{ id: 'a', shape: 'sphere', radius: 0.1, density: 500 }], spin: { axis: [0, 0, 1], rate: 1 } } },
+  'patch /workspaces/:workspaceId/variants/:variantId': { version: 1, label: 'x' },
+  'post /workspaces/:workspaceId/variants/:variantId/review/request': { reviewerId: '00000000-0000-4000-8000-000000000000' },
+  'post /workspaces/:workspaceId/variants/:variantId/review/comments': { body: 'A comment' },
+  'post /workspaces/:workspaceId/variants/:variantId/review/decision': { decision: 'approved' },
 };
+
+/** Ids that exist nowhere: an allowed role reaches the lookup (404) or validation (400). */
+const NOWHERE_IDS = (workspaceId: string) => ({
+  workspaceId, memberId: NOWHERE, invitationId: NOWHERE, materialId: NOWHERE, projectId: NOWHERE, partId: NOWHERE, variantId: NOWHERE,
+});
 
 beforeAll(async () => {
   t = await startTestApp();
@@ -33,14 +49,20 @@ beforeAll(async () => {
   const bMember = await Membership.findOne({ where: { workspaceId: b.workspace.id } });
   const inv = await request(t.app).post(`/api/v1/workspaces/${b.workspace.id}/invitations`).set(bearer(b.accessToken))
     .send({ email: 'b-invitee@example.test', role: 'reviewer' }).expect(201);
-  other = { workspaceId: b.workspace.id, memberId: bMember!.id, invitationId: inv.body.id };
+  const material = await Material.create({ workspaceId: b.workspace.id, name: 'B wood', family: 'wood', density: 600, densityTolerance: 0.05, source: 'test' });
+  const project = await Project.create({ workspaceId: b.workspace.id, name: 'B project', category: 'bat', createdById: b.user.id });
+  const part = await Part.create({ workspaceId: b.workspace.id, projectId: project.id, name: 'B part' });
+  const variant = await Variant.create({ workspaceId: b.workspace.id, partId: part.id, number: 1, document: {}, report: {}, engineVersion: 'test', authorId: b.user.id });
+  other = {
+    workspaceId: b.workspace.id, memberId: bMember!.id, invitationId: inv.body.id, materialId: material.id,
+    projectId: project.id, partId: part.id, variantId: variant.id,
+  };
   expect(await Invitation.count({ where: { id: other.invitationId } })).toBe(1);
 });
 afterAll(async () => { await t.close(); });
 
 const workspaceRoutes = () => t.ctx.catalogue.routes.filter((r) => r.path.startsWith('/workspaces/:workspaceId'));
 const key = (r: { method: string; path: string }) => `${r.method} ${r.path}`;
-const NOWHERE = '00000000-0000-4000-8000-000000000000';
 
 function fill(path: string, ids: Record<string, string>): string {
   return '/api/v1' + path.replace(/:([A-Za-z]+)/g, (_m, name: string) => {
@@ -70,7 +92,7 @@ describe('role matrix: each role × each workspace route → allowed or 403', ()
     for (const route of workspaceRoutes()) {
       if (route.access.kind !== 'workspace') continue;
       // Child ids that do not exist: an allowed role reaches the lookup (404) or validation (400).
-      const url = fill(route.path, { workspaceId: actor.workspaceId, memberId: NOWHERE, invitationId: NOWHERE });
+      const url = fill(route.path, NOWHERE_IDS(actor.workspaceId));
       const res = await call(route.method, url, actor.token, route.method === 'get' || route.method === 'delete' ? undefined : {});
       const allowed = can(role, route.access.permission);
       if (allowed) expect({ route: key(route), status: res.status }).not.toEqual({ route: key(route), status: 403 });
@@ -84,7 +106,7 @@ describe('tenancy matrix', () => {
   it('answers 404 for every route called with another workspace’s id', async () => {
     const owner = tokens.owner!;
     for (const route of workspaceRoutes()) {
-      const url = fill(route.path, { workspaceId: other.workspaceId, memberId: other.memberId, invitationId: other.invitationId });
+      const url = fill(route.path, other);
       const res = await call(route.method, url, owner.token, VALID_BODIES[key(route)]);
       expect({ route: key(route), status: res.status }).toEqual({ route: key(route), status: 404 });
     }
@@ -93,18 +115,21 @@ describe('tenancy matrix', () => {
   it('answers 404 for every row id of another workspace used under one’s own workspace', async () => {
     const owner = tokens.owner!;
     for (const route of workspaceRoutes().filter((r) => /:(?!workspaceId)\w+/.test(r.path))) {
-      const url = fill(route.path, { workspaceId: owner.workspaceId, memberId: other.memberId, invitationId: other.invitationId });
+      const url = fill(route.path, { ...other, workspaceId: owner.workspaceId });
       const res = await call(route.method, url, owner.token, VALID_BODIES[key(route)]);
       expect({ route: key(route), status: res.status }).toEqual({ route: key(route), status: 404 });
     }
     // Nothing of B changed.
     expect(await Membership.count({ where: { id: other.memberId, role: 'owner' } })).toBe(1);
     expect((await Invitation.findByPk(other.invitationId))!.status).toBe('pending');
+    expect((await Part.findByPk(other.partId))!.name).toBe('B part');
+    expect((await Variant.findByPk(other.variantId))!.status).toBe('draft');
+    expect((await Material.findByPk(other.materialId))!.name).toBe('B wood');
   });
 
   it('answers 401 for every workspace route without a token', async () => {
     for (const route of workspaceRoutes()) {
-      const url = fill(route.path, { workspaceId: other.workspaceId, memberId: other.memberId, invitationId: other.invitationId });
+      const url = fill(route.path, other);
       const res = await call(route.method, url, undefined, VALID_BODIES[key(route)]);
       expect({ route: key(route), status: res.status }).toEqual({ route: key(route), status: 401 });
     }

@@ -37,3 +37,18 @@ export function passwordResetMail(args: { to: string; name: string; url: string;
     html: layout('Reset your password', lines, { label: 'Choose a new password', url: args.url }, 'If it was not you, ignore this e-mail; your password stays as it is.'),
   };
 }
+
+/** Asks a reviewer to sign a variant off. */
+export function reviewRequestMail(args: { to: string; reviewerName: string; requesterName: string; variantLabel: string; partName: string; message: string; url: string }): OutgoingMail {
+  const lines = [
+    `Hello ${args.reviewerName},`,
+    `${args.requesterName} asks you to review ${args.variantLabel} of "${args.partName}" and approve it or send it back.`,
+    ...(args.message ? [`Their note: ${args.message}`] : []),
+  ];
+  return {
+    to: args.to,
+    subject: `Review requested: ${args.partName} ${args.variantLabel}`,
+    text: `${lines.join('\n')}\n\nOpen the variant: ${args.url}`,
+    html: layout(`Review ${args.partName} ${args.variantLabel}`, lines, { label: 'Open the variant', url: args.url }, 'You receive this because you are a reviewer in this workspace.'),
+  };
+}

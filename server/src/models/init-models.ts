@@ -3,7 +3,14 @@ import { AuditEvent } from './audit-event';
 import { Invitation } from './invitation';
 import { Membership } from './membership';
 import { PasswordReset } from './password-reset';
+import { Material } from './material';
+import { Measurement } from './measurement';
+import { Mesh } from './mesh';
+import { Part } from './part';
 import { Project } from './project';
+import { ReviewEntry } from './review-entry';
+import { ScatterStudy } from './scatter-study';
+import { Variant } from './variant';
 import { RefreshToken } from './refresh-token';
 import { SignInSession } from './sign-in-session';
 import { User } from './user';
@@ -11,7 +18,8 @@ import { Workspace } from './workspace';
 
 /** Initialises every model on the instance and wires the associations. */
 export function initModels(sequelize: Sequelize): void {
-  for (const model of [User, Workspace, Membership, SignInSession, RefreshToken, PasswordReset, Invitation, AuditEvent, Project]) {
+  for (const model of [User, Workspace, Membership, SignInSession, RefreshToken, PasswordReset, Invitation, AuditEvent, Project,
+    Material, Part, Variant, Mesh, ReviewEntry, Measurement, ScatterStudy]) {
     model.initModel(sequelize);
   }
   Workspace.hasMany(Membership, { foreignKey: 'workspaceId' });
@@ -28,6 +36,16 @@ export function initModels(sequelize: Sequelize): void {
   AuditEvent.belongsTo(Workspace, { foreignKey: 'workspaceId' });
   Project.belongsTo(Workspace, { foreignKey: 'workspaceId' });
   Project.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+  Project.hasMany(Part, { foreignKey: 'projectId' });
+  Part.belongsTo(Project, { foreignKey: 'projectId' });
+  Part.hasMany(Variant, { foreignKey: 'partId', as: 'variants' });
+  Variant.belongsTo(Part, { foreignKey: 'partId', as: 'part' });
+  Variant.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
+  ReviewEntry.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
+  ReviewEntry.belongsTo(User, { foreignKey: 'reviewerId', as: 'reviewer' });
+  ReviewEntry.belongsTo(Variant, { foreignKey: 'variantId' });
+  Measurement.belongsTo(Variant, { foreignKey: 'variantId' });
+  ScatterStudy.belongsTo(Variant, { foreignKey: 'variantId' });
 }
 
-export { AuditEvent, Invitation, Membership, PasswordReset, Project, RefreshToken, SignInSession, User, Workspace };
+export { AuditEvent, Invitation, Material, Measurement, Membership, Mesh, Part, PasswordReset, Project, RefreshToken, ReviewEntry, ScatterStudy, SignInSession, User, Variant, Workspace };
