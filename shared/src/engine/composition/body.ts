@@ -15,5 +15,5 @@ export interface Body {
 
 /** A new zero body. */
 export function createBody(): Body {
-  return { mass: 0, volume: 0, center: new Float64Array(3), inertia: new Float64Array(9) };
+  return { mass: 0, volume: 0, center: [0, 0, 0], inertia: [0, 0, 0, 0, 0, 0, 0, 0, 0] };
 }

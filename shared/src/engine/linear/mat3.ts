@@ -1,30 +1,28 @@
 /**
- * 3×3 matrices as Float64Array(9), row-major: m[3*i + j] is row i, column j.
+ * 3×3 matrices as plain number arrays of length 9, row-major: m[3*i + j] is row i, column j.
  * Output argument first; `out` may alias an input unless a function says otherwise.
  */
-export type Mat3 = Float64Array;
+export type Mat3 = number[];
 
 /** A new zero matrix. */
 export function mat3(): Mat3 {
-  return new Float64Array(9);
+  return [0, 0, 0, 0, 0, 0, 0, 0, 0];
 }
 
 /** A new matrix from nine numbers, row by row. */
 export function mat3From(a: ArrayLike<number>): Mat3 {
-  const m = new Float64Array(9);
-  for (let i = 0; i < 9; i++) m[i] = a[i];
-  return m;
+  return [a[0], a[1], a[2], a[3], a[4], a[5], a[6], a[7], a[8]];
 }
 
 /** out = identity. */
-export function identity(out: Mat3): Mat3 {
+export function identity<T extends Mat3 | Float64Array>(out: T): T {
   out.fill(0);
   out[0] = out[4] = out[8] = 1;
   return out;
 }
 
 /** out = a·b. */
-export function multiply(out: Mat3, a: ArrayLike<number>, b: ArrayLike<number>): Mat3 {
+export function multiply<T extends Mat3 | Float64Array>(out: T, a: ArrayLike<number>, b: ArrayLike<number>): T {
   const a00 = a[0], a01 = a[1], a02 = a[2], a10 = a[3], a11 = a[4], a12 = a[5], a20 = a[6], a21 = a[7], a22 = a[8];
   const b00 = b[0], b01 = b[1], b02 = b[2], b10 = b[3], b11 = b[4], b12 = b[5], b20 = b[6], b21 = b[7], b22 = b[8];
   out[0] = a00 * b00 + a01 * b10 + a02 * b20;
@@ -40,7 +38,7 @@ export function multiply(out: Mat3, a: ArrayLike<number>, b: ArrayLike<number>):
 }
 
 /** out = aᵀ. */
-export function transpose(out: Mat3, a: ArrayLike<number>): Mat3 {
+export function transpose<T extends Mat3 | Float64Array>(out: T, a: ArrayLike<number>): T {
   const a01 = a[1], a02 = a[2], a12 = a[5];
   out[0] = a[0];
   out[4] = a[4];
@@ -55,7 +53,7 @@ export function transpose(out: Mat3, a: ArrayLike<number>): Mat3 {
 }
 
 /** out = R·S·Rᵀ: a tensor S given in a rotated frame expressed in the outer frame (R maps inner to outer). */
-export function rotateTensor(out: Mat3, r: ArrayLike<number>, s: ArrayLike<number>): Mat3 {
+export function rotateTensor<T extends Mat3 | Float64Array>(out: T, r: ArrayLike<number>, s: ArrayLike<number>): T {
   const t = scratch;
   multiply(t, r, s);
   const r00 = r[0], r01 = r[1], r02 = r[2], r10 = r[3], r11 = r[4], r12 = r[5], r20 = r[6], r21 = r[7], r22 = r[8];
@@ -71,10 +69,10 @@ export function rotateTensor(out: Mat3, r: ArrayLike<number>, s: ArrayLike<numbe
   out[8] = t20 * r20 + t21 * r21 + t22 * r22;
   return out;
 }
-const scratch = new Float64Array(9);
+const scratch: Mat3 = mat3();
 
 /** out = M·v. */
-export function transformVec3(out: Float64Array, m: ArrayLike<number>, v: ArrayLike<number>): Float64Array {
+export function transformVec3<T extends number[] | Float64Array>(out: T, m: ArrayLike<number>, v: ArrayLike<number>): T {
   const x = v[0], y = v[1], z = v[2];
   out[0] = m[0] * x + m[1] * y + m[2] * z;
   out[1] = m[3] * x + m[4] * y + m[5] * z;

@@ -9,7 +9,7 @@ const DEG = Math.PI / 180;
  * Source: the elementary rotation matrices and their composition, e.g. Goldstein, Classical
  * Mechanics, 3rd ed., §4.4 (applied about fixed axes, so later rotations multiply on the left).
  */
-export function rotationFromDegrees(out: Mat3, rx: number, ry: number, rz: number): Mat3 {
+export function rotationFromDegrees<T extends Mat3 | Float64Array>(out: T, rx: number, ry: number, rz: number): T {
   const cx = Math.cos(rx * DEG), sx = Math.sin(rx * DEG);
   const cy = Math.cos(ry * DEG), sy = Math.sin(ry * DEG);
   const cz = Math.cos(rz * DEG), sz = Math.sin(rz * DEG);

@@ -46,7 +46,7 @@ export interface PlacedPiece {
   /** Placed mass properties in part coordinates (signed). */
   body: Body;
   /** Dimensions in DIMENSION_NAMES order, and which the document states. */
-  dimensions: Float64Array;
+  dimensions: number[];
   present: boolean[];
   /** Mesh vertices in local, scaled coordinates (meshes only), for reach and extents. */
   meshVertices?: Float64Array;
@@ -110,7 +110,9 @@ export function partMassProperties(doc: PartDocument, resolvers: PartResolvers =
     if (p.shape === 'point') {
       body.mass = sign * p.mass!;
       body.volume = 0;
-      body.center.set(p.position);
+      body.center[0] = p.position[0];
+      body.center[1] = p.position[1];
+      body.center[2] = p.position[2];
     } else {
       placeSolid(body, solid, sign * density, rotation, p.position);
     }

@@ -22,7 +22,7 @@ export const DIMENSION_NAMES: Record<PrimitiveShape, readonly string[]> = {
 };
 
 /** The dimension values of a primitive in DIMENSION_NAMES order, and which of them the document states. */
-export function primitiveDimensions(p: Primitive): { values: Float64Array; present: boolean[] } {
+export function primitiveDimensions(p: Primitive): { values: number[]; present: boolean[] } {
   let v: (number | undefined)[];
   switch (p.shape) {
     case 'box': v = [p.size[0], p.size[1], p.size[2], p.wall]; break;
@@ -34,7 +34,12 @@ export function primitiveDimensions(p: Primitive): { values: Float64Array; prese
     case 'capsule': v = [p.radius, p.length]; break;
     default: v = [];
   }
-  return { values: Float64Array.from(v, (x) => x ?? 0), present: v.map((x) => x !== undefined) };
+  const values: number[] = [], present: boolean[] = [];
+  for (let i = 0; i < v.length; i++) {
+    values.push(v[i] ?? 0);
+    present.push(v[i] !== undefined);
+  }
+  return { values, present };
 }
 
 /** Whether perturbed dimensions still describe a valid solid (the schema's rules). */

@@ -15,7 +15,7 @@ export interface Solid {
 
 /** A new zero solid. */
 export function createSolid(): Solid {
-  return { volume: 0, centroid: new Float64Array(3), inertia: new Float64Array(9) };
+  return { volume: 0, centroid: [0, 0, 0], inertia: [0, 0, 0, 0, 0, 0, 0, 0, 0] };
 }
 
 /** out = a diagonal solid: volume V, centroid on the z axis at zc, principal moments (ixx, iyy, izz) at unit density. */

@@ -35,7 +35,7 @@ export class PartModel {
   private readonly solid = createSolid();
   /** Current values of every parameter (density as a factor of nominal, dimensions in m). */
   readonly values: Float64Array;
-  private readonly dims: Float64Array[];
+  private readonly dims: number[][];
 
   constructor(
     readonly doc: PartDocument,
@@ -43,7 +43,7 @@ export class PartModel {
     tolerances: { default?: Tolerance; primitives?: Record<string, Tolerance> } = {},
   ) {
     this.bodies = mp.pieces.map((p) => createBody());
-    this.dims = mp.pieces.map((p) => Float64Array.from(p.dimensions));
+    this.dims = mp.pieces.map((p) => [...p.dimensions]);
     mp.pieces.forEach((piece, k) => {
       const p = piece.primitive;
       const tol = { ...DEFAULT_TOLERANCE, ...tolerances.default, ...piece.tolerance, ...tolerances.primitives?.[p.id] };
@@ -80,7 +80,9 @@ export class PartModel {
       if (p.shape === 'point') {
         b.mass = piece.sign * p.mass! * factor;
         b.volume = 0;
-        b.center.set(p.position);
+        b.center[0] = p.position[0];
+        b.center[1] = p.position[1];
+        b.center[2] = p.position[2];
         b.inertia.fill(0);
         continue;
       }

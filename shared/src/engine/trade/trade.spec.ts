@@ -33,7 +33,7 @@ describe('trade figures of a uniform round rod from its butt', () => {
   it('a point mass added at distance d from the swingweight axis adds m·d² (rule of thumb, common practice)', () => {
     const tape = createBody();
     tape.mass = 0.005;
-    tape.center.set([0.05, 0, 0.6]);
+    tape.center = [0.05, 0, 0.6];
     const sum = composeBodies(undefined, [rod, tape]);
     // The swing axis is long axis × face normal = −x: distance² from the line through (0, 0, 0.1) along x is y² + (z − 0.1)².
     expectRelClose(tradeFigures(sum, grip).swingweight, t.swingweight + 0.005 * (0.5 ** 2), 1e-13);
