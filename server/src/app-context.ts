@@ -9,6 +9,7 @@ import type { AttemptLimits } from './http/attempt-limits';
 import type { Mailer } from './mail/mailer';
 import type { PaymentProvider } from './billing/payment-provider';
 import type { ComputePool } from './compute/compute-pool';
+import type { ScatterQueue } from './scatter/scatter-queue';
 
 /** The long-lived collaborators of one server process, built once in `createContext`. */
 export interface AppContext {
@@ -22,5 +23,6 @@ export interface AppContext {
   limits: AttemptLimits;
   payment: PaymentProvider;
   compute: ComputePool;
+  scatter: ScatterQueue;
   catalogue: ApiCatalogue;
 }

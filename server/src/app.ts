@@ -13,7 +13,11 @@ import { authenticate, workspaceGate } from './http/authenticate';
 import { invitationAcceptRoutes, invitationRoutes } from './invitations/invitation-routes';
 import { memberRoutes } from './members/member-routes';
 import { docsRoutes } from './openapi/docs-routes';
+import { exportRoutes } from './exports/export-routes';
 import { materialRoutes } from './materials/material-routes';
+import { measurementRoutes } from './measurements/measurement-routes';
+import { meshRoutes } from './meshes/mesh-routes';
+import { scatterRoutes } from './scatter/scatter-routes';
 import { partRoutes } from './parts/part-routes';
 import { projectRoutes } from './projects/project-routes';
 import { reviewRoutes } from './reviews/review-routes';
@@ -61,6 +65,10 @@ export function createApp(ctx: AppContext): express.Express {
   partRoutes(ctx, workspace);
   variantRoutes(ctx, workspace);
   reviewRoutes(ctx, workspace);
+  meshRoutes(ctx, workspace);
+  measurementRoutes(ctx, workspace);
+  scatterRoutes(ctx, workspace);
+  exportRoutes(ctx, workspace);
   api.use('/workspaces/:workspaceId', workspace);
 
   api.use(apiNotFound);

@@ -10,6 +10,7 @@ import { createDatabase } from './db/database';
 import { ApiCatalogue } from './http/api-catalogue';
 import { AttemptLimits } from './http/attempt-limits';
 import { Mailer } from './mail/mailer';
+import { ScatterQueue } from './scatter/scatter-queue';
 
 /** Wires the collaborators of one server process from its configuration. */
 export function createContext(config: Config, options: { logStream?: pino.DestinationStream } = {}): AppContext {
@@ -18,7 +19,7 @@ export function createContext(config: Config, options: { logStream?: pino.Destin
     options.logStream ?? pino.destination(1),
   );
   const sequelize = createDatabase(config.databaseUrl);
-  return {
+  const ctx = {
     config,
     logger,
     sequelize,
@@ -30,11 +31,14 @@ export function createContext(config: Config, options: { logStream?: pino.Destin
     payment: new PaymentProvider(config.payment),
     compute: new ComputePool(),
     catalogue: new ApiCatalogue(),
-  };
+  } as AppContext;
+  ctx.scatter = new ScatterQueue(ctx);
+  return ctx;
 }
 
 /** Closes pools and connections so the process can exit. */
 export async function closeContext(ctx: AppContext): Promise<void> {
   ctx.mailer.close();
+  await ctx.scatter.stop();
   await Promise.all([ctx.sequelize.close(), ctx.compute.close()]);
 }

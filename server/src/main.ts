@@ -14,6 +14,7 @@ export async function startServer(options: { seedDemo?: boolean } = {}) {
   const ctx = createContext(config);
   const applied = await migrate(ctx.sequelize);
   const seeded = options.seedDemo ? await seedDemo(ctx) : null;
+  await ctx.scatter.start();
   const app = createApp(ctx);
   const server = await new Promise<import('node:http').Server>((resolve, reject) => {
     const s = app.listen(config.port, config.host, () => resolve(s));

@@ -1,9 +1,22 @@
 import express, { Router } from 'express';
 import { z } from 'zod';
-import { partDocumentSchema } from '@tumblewise/shared';
+import { idSchema, partDocumentSchema } from '@tumblewise/shared';
 import { simulateInputSchema, type SimulationResult, type SpinReport } from '@tumblewise/engine';
 import type { AppContext } from '../app-context';
 import { routeGroup } from '../http/api-route';
+import { AppError } from '../http/app-error';
+import { taskReferences } from '../compute/task-references';
+import type { TaskReferences } from '../compute/compute-tasks';
+import { Membership } from '../models/init-models';
+
+const workspaceQuery = z.object({ workspace: idSchema.optional().describe('resolve materialId and meshId against this workspace (you must be a member)') });
+
+/** References of a document in a workspace the caller belongs to (404 otherwise). */
+async function referencesFor(userId: string, workspaceId: string | undefined, doc: unknown): Promise<TaskReferences | undefined> {
+  if (!workspaceId) return undefined;
+  if (!(await Membership.findOne({ where: { workspaceId, userId } }))) throw AppError.notFound('Workspace');
+  return taskReferences(workspaceId, doc);
+}
 
 const reportSchema = z.record(z.string(), z.unknown()).describe('The spin report (see the part document and report in the product brief).');
 
@@ -14,16 +27,20 @@ export function analysisRoutes(ctx: AppContext): Router {
 
   route({
     method: 'post', path: '/analyze', summary: 'The spin report of a part document; nothing is saved.',
-    access: { kind: 'user' }, body: partDocumentSchema, bodyValidatedBy: 'engine', errors: [413, 422],
+    access: { kind: 'user' }, body: partDocumentSchema, bodyValidatedBy: 'engine', query: workspaceQuery, errors: [404, 413, 422],
     success: { status: 200, description: 'The spin report (SI units).', schema: reportSchema },
-    handler: async ({ body }, req) => ctx.compute.run<SpinReport>({ kind: 'analyze', part: body }, abortOnClose(req)),
+    handler: async ({ body, query, auth }, req) => ctx.compute.run<SpinReport>({
+      kind: 'analyze', part: body, references: await referencesFor(auth!.user.id, query.workspace, body),
+    }, abortOnClose(req)),
   });
 
   route({
     method: 'post', path: '/simulate', summary: 'Torque-free motion from the intended spin plus a misalignment: sampled ω, attitude quaternions, L, 2T, |L| and the polhode.',
-    access: { kind: 'user' }, body: simulateInputSchema, bodyValidatedBy: 'engine', errors: [413, 422],
+    access: { kind: 'user' }, body: simulateInputSchema, bodyValidatedBy: 'engine', query: workspaceQuery, errors: [404, 413, 422],
     success: { status: 200, description: 'Samples of the motion.', schema: z.record(z.string(), z.unknown()) },
-    handler: async ({ body }, req) => ctx.compute.run<SimulationResult>({ kind: 'simulate', input: body }, abortOnClose(req)),
+    handler: async ({ body, query, auth }, req) => ctx.compute.run<SimulationResult>({
+      kind: 'simulate', input: body, references: await referencesFor(auth!.user.id, query.workspace, (body as { part?: unknown } | null)?.part),
+    }, abortOnClose(req)),
   });
 
   return router;

@@ -25,7 +25,8 @@ export class ComputePool {
   async run<T>(task: ComputeTask, signal?: AbortSignal): Promise<T> {
     let outcome: ComputeOutcome;
     try {
-      outcome = await this.pool.run(task, { signal });
+      const transferList = task.kind === 'scatter' && task.progress ? [task.progress] : undefined;
+      outcome = await this.pool.run(task, { signal, transferList: transferList as never });
     } catch (err) {
       if ((err as Error)?.message?.includes('Task queue is at limit')) {
         throw new AppError(503, 'busy', 'The server is busy with other computations. Try again in a moment.', undefined, { 'Retry-After': '5' });

@@ -31,6 +31,8 @@ export interface Config {
     jsonBody: string;
     /** Body limit of part documents (inline meshes). */
     partBody: string;
+    meshUploadBytes: number;
+    meshTriangles: number;
     signinPerWindow: number;
     signupPerWindow: number;
     passwordResetPerWindow: number;
@@ -101,6 +103,8 @@ export function loadConfig(env: Env = process.env): Config {
     limits: {
       jsonBody: env.JSON_BODY_LIMIT ?? '1mb',
       partBody: env.PART_BODY_LIMIT ?? '32mb',
+      meshUploadBytes: int(env, 'MESH_UPLOAD_LIMIT_BYTES', 64 * 1024 * 1024, 1024),
+      meshTriangles: int(env, 'MESH_MAX_TRIANGLES', 2_000_000, 1),
       signinPerWindow: int(env, 'RATE_LIMIT_SIGNIN', 10, 1),
       signupPerWindow: int(env, 'RATE_LIMIT_SIGNUP', 10, 1),
       passwordResetPerWindow: int(env, 'RATE_LIMIT_PASSWORD_RESET', 5, 1),

@@ -38,8 +38,10 @@ export interface RouteSpec<B extends z.ZodType, Q extends z.ZodType, P extends z
   success: { status: number; description: string; schema?: z.ZodType };
   /** Other statuses this route answers, for the API description. */
   errors?: number[];
-  /** Middleware run before validation (rate limits). */
+  /** Middleware run before the access check (rate limits). */
   before?: RequestHandler[];
+  /** Middleware run after the access check and before validation (upload parsers). */
+  parsers?: RequestHandler[];
   handler: (input: RouteInput<z.output<B>, z.output<Q>, z.output<P>>, req: Request, res: Response) => Promise<unknown> | unknown;
 }
 
@@ -64,9 +66,12 @@ export function apiRoute<B extends z.ZodType, Q extends z.ZodType, P extends z.Z
   catalogue.add({ method: spec.method, path: fullPath, access: spec.access });
   catalogue.openapi.registerPath(describe(fullPath, spec));
 
+  const access: RequestHandler = (req, _res, next) => {
+    checkAccess(spec.access, (req as Request & { auth?: RequestAuth }).auth ?? null, req);
+    next();
+  };
   const handler: RequestHandler = async (req, res) => {
     const auth = (req as Request & { auth?: RequestAuth }).auth ?? null;
-    checkAccess(spec.access, auth, req);
     const { workspaceId: _w, ...ownParams } = req.params as Record<string, string>;
     const input = {
       body: spec.body && spec.bodyValidatedBy !== 'engine' ? parseOrThrow(spec.body, req.body, 'body') : req.body,
@@ -79,7 +84,7 @@ export function apiRoute<B extends z.ZodType, Q extends z.ZodType, P extends z.Z
     if (result === undefined) res.status(spec.success.status === 200 ? 204 : spec.success.status).end();
     else res.status(spec.success.status).json(result);
   };
-  router[spec.method](spec.path, ...(spec.before ?? []), handler);
+  router[spec.method](spec.path, ...(spec.before ?? []), access, ...(spec.parsers ?? []), handler);
 }
 
 /** A malformed id in the path is as good as a missing row: 404, so ids cannot be probed. */

@@ -12,7 +12,7 @@ export class ScatterStudy extends Model<InferAttributes<ScatterStudy>, InferCrea
   declare seed: number;
   declare state: CreationOptional<ScatterStudyDto['state']>;
   declare progress: CreationOptional<number>;
-  declare result: CreationOptional<unknown>;
+  declare result: CreationOptional<object | null>;
   declare error: CreationOptional<string | null>;
   declare jobId: CreationOptional<string | null>;
   declare createdById: string | null;

@@ -8,7 +8,7 @@ import { AppError } from '../http/app-error';
 import { routeGroup } from '../http/api-route';
 import { membershipOf } from '../http/authenticate';
 import { findInWorkspace } from '../http/find-in-workspace';
-import { materialReferences } from '../materials/material-references';
+import { taskReferences } from '../compute/task-references';
 import { Part, User, Variant } from '../models/init-models';
 import { ENGINE_VERSION } from './engine-version';
 
@@ -40,7 +40,7 @@ export function variantRoutes(ctx: AppContext, router: Router): void {
       const { workspaceId } = membershipOf(req);
       await findInWorkspace(Part, params.partId, workspaceId, 'Part');
       // Analyse first: a document the engine refuses is never saved.
-      const report = await ctx.compute.run<SpinReport>({ kind: 'analyze', part: body.document, references: { materials: await materialReferences(workspaceId, body.document) } });
+      const report = await ctx.compute.run<SpinReport>({ kind: 'analyze', part: body.document, references: await taskReferences(workspaceId, body.document) });
       const variant = await ctx.sequelize.transaction(async (transaction) => {
         await Part.findOne({ where: { id: params.partId, workspaceId }, transaction, lock: transaction.LOCK.UPDATE });
         const last = (await Variant.max<number, Variant>('number', { where: { partId: params.partId }, transaction })) ?? 0;

@@ -35,3 +35,4 @@ export type { Distribution } from './scatter/summarize';
 export { SeededRandom } from './scatter/seeded-random';
 export { DEFAULT_TOLERANCE } from './scatter/part-model';
 export { classifySpin, type SpinClass } from './spin/classify-spin';
+export { rotationFromDegrees } from './linear/rotation-from-degrees';

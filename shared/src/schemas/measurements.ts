@@ -17,4 +17,13 @@ export type Measurement = z.infer<typeof measurementSchema>;
 
 /** CSV columns of a measured-data upload, in this order (header row required). */
 export const MEASUREMENT_CSV_COLUMNS = ['axis', 'value', 'unit', 'method'] as const;
-export const MEASUREMENT_UNITS = ['kg*m^2', 'g*cm^2', 'kg*cm^2', 'oz*in^2'] as const;
+/** Units accepted in the `unit` column: the display labels and their plain-ASCII spellings. */
+export const MEASUREMENT_UNITS: Record<string, 'kg·m²' | 'kg·cm²' | 'g·cm²' | 'oz·in²'> = {
+  'kg·m²': 'kg·m²', 'kg*m^2': 'kg·m²', 'kg m^2': 'kg·m²', 'kgm2': 'kg·m²',
+  'kg·cm²': 'kg·cm²', 'kg*cm^2': 'kg·cm²', 'kg cm^2': 'kg·cm²', 'kgcm2': 'kg·cm²',
+  'g·cm²': 'g·cm²', 'g*cm^2': 'g·cm²', 'g cm^2': 'g·cm²', 'gcm2': 'g·cm²',
+  'oz·in²': 'oz·in²', 'oz*in^2': 'oz·in²', 'oz in^2': 'oz·in²', 'ozin2': 'oz·in²',
+};
+
+/** Axis words recognised for the predicted value; anything else is stored with no prediction. */
+export const MEASUREMENT_AXES = ['major', 'intermediate', 'minor', 'swing', 'twist', 'pivot'] as const;

@@ -1,0 +1,70 @@
+import { createHash } from 'node:crypto';
+import { Router } from 'express';
+import multer from 'multer';
+import { z } from 'zod';
+import { idSchema, meshSchema } from '@tumblewise/shared';
+import type { AppContext } from '../app-context';
+import type { MeshCheckResult } from '../compute/compute-tasks';
+import { recordAudit } from '../audit/audit-log';
+import { AppError } from '../http/app-error';
+import { routeGroup } from '../http/api-route';
+import { membershipOf } from '../http/authenticate';
+import { findInWorkspace } from '../http/find-in-workspace';
+import { Mesh } from '../models/init-models';
+
+const params = z.object({ meshId: idSchema });
+const uploadFields = z.object({ name: z.string().trim().max(200, { message: 'must be at most 200 characters' }).optional() });
+
+/** STL uploads: checked on a worker (closed, manifold, oriented, finite), stored with their SHA-256. */
+export function meshRoutes(ctx: AppContext, router: Router): void {
+  const route = routeGroup(router, ctx.catalogue, '/workspaces/:workspaceId');
+  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: ctx.config.limits.meshUploadBytes, files: 1, fields: 5 } });
+
+  route({
+    method: 'get', path: '/meshes', summary: 'Uploaded meshes of the workspace.',
+    access: { kind: 'workspace', permission: 'workspace.read' },
+    success: { status: 200, description: 'Meshes, newest first (without their bytes).', schema: z.array(meshSchema) },
+    handler: async (_i, req) => {
+      const rows = await Mesh.findAll({ where: { workspaceId: membershipOf(req).workspaceId }, attributes: { exclude: ['data'] }, order: [['createdAt', 'DESC']] });
+      return rows.map((m) => m.toDto());
+    },
+  });
+
+  route({
+    method: 'post', path: '/meshes', summary: 'Upload a binary or ASCII STL (multipart field "file"); a file that is not a closed solid is refused and nothing is stored.',
+    access: { kind: 'workspace', permission: 'projects.edit' }, parsers: [upload.single('file')], errors: [413, 422],
+    success: { status: 201, description: 'The stored mesh with its check report.', schema: meshSchema },
+    handler: async (_i, req) => {
+      const { workspaceId } = membershipOf(req);
+      const file = req.file;
+      if (!file) throw AppError.badRequest('file is required: send the STL as multipart/form-data in the field "file".', 'file');
+      const fields = uploadFields.safeParse(req.body ?? {});
+      if (!fields.success) throw AppError.badRequest(`name ${fields.error.issues[0].message}.`, 'name');
+      const check = await ctx.compute.run<MeshCheckResult>({ kind: 'check-mesh', bytes: new Uint8Array(file.buffer), maxTriangles: ctx.config.limits.meshTriangles });
+      const blocking = check.problems.filter((p) => !p.fixed);
+      if (!check.ok || blocking.length > 0) {
+        const list = (blocking.length ? blocking : check.problems).map((p) => p.message).join('; ');
+        const tooLarge = blocking.some((p) => p.code === 'too_large');
+        throw new AppError(tooLarge ? 413 : 422, tooLarge ? 'too_large' : 'mesh_invalid', `The STL cannot be used: ${list}.`, 'file');
+      }
+      const mesh = await Mesh.create({
+        workspaceId, name: fields.data.name || file.originalname.slice(0, 200) || 'mesh.stl', sha256: createHash('sha256').update(file.buffer).digest('hex'),
+        byteSize: file.size, triangleCount: check.triangleCount, format: check.format!, data: file.buffer,
+        report: { fixed: check.problems.filter((p) => p.fixed).map((p) => p.message), warnings: [] }, createdById: membershipOf(req).userId,
+      });
+      await recordAudit({ workspaceId, actorId: mesh.createdById, action: 'mesh.uploaded', targetType: 'mesh', targetId: mesh.id, targetLabel: mesh.name, details: { triangles: mesh.triangleCount } });
+      return mesh.toDto();
+    },
+  });
+
+  route({
+    method: 'delete', path: '/meshes/:meshId', summary: 'Delete an uploaded mesh.',
+    access: { kind: 'workspace', permission: 'projects.edit' }, params,
+    success: { status: 204, description: 'Deleted.' },
+    handler: async ({ params: p }, req) => {
+      const mesh = await findInWorkspace(Mesh, p.meshId, membershipOf(req).workspaceId, 'Mesh', { attributes: { exclude: ['data'] } });
+      await mesh.destroy();
+      return undefined;
+    },
+  });
+}
