@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { PERMISSIONS, ROLES, can, type Role } from '@tumblewise/shared';
-import { Invitation, Material, Membership, Part, Project, User, Variant } from '../models/init-models';
+import { Invitation, Material, Membership, Mesh, Part, Project, ScatterStudy, User, Variant } from '../models/init-models';
 import { bearer, signUp, startTestApp, type TestApp } from '../test-support/test-app';
 
 /**
@@ -11,7 +11,7 @@ const NOWHERE = '00000000-0000-4000-8000-000000000000';
 let t: TestApp;
 type Actor = { token: string; workspaceId: string };
 const tokens: Partial<Record<Role, Actor>> = {};
-let other: Record<'workspaceId' | 'memberId' | 'invitationId' | 'materialId' | 'projectId' | 'partId' | 'variantId', string>;
+let other: Record<'workspaceId' | 'memberId' | 'invitationId' | 'materialId' | 'projectId' | 'partId' | 'variantId' | 'meshId' | 'studyId', string>;
 
 /** A valid body for each write route, so the tenancy checks reach the row lookup. */
 const VALID_BODIES: Record<string, object> = {
@@ -28,11 +28,13 @@ const VALID_BODIES: Record<string, object> = {
   'post /workspaces/:workspaceId/variants/:variantId/review/request': { reviewerId: '00000000-0000-4000-8000-000000000000' },
   'post /workspaces/:workspaceId/variants/:variantId/review/comments': { body: 'A comment' },
   'post /workspaces/:workspaceId/variants/:variantId/review/decision': { decision: 'approved' },
+  'post /workspaces/:workspaceId/scatter': { variantId: '__variant__', samples: 10 },
 };
 
 /** Ids that exist nowhere: an allowed role reaches the lookup (404) or validation (400). */
 const NOWHERE_IDS = (workspaceId: string) => ({
   workspaceId, memberId: NOWHERE, invitationId: NOWHERE, materialId: NOWHERE, projectId: NOWHERE, partId: NOWHERE, variantId: NOWHERE,
+  meshId: NOWHERE, studyId: NOWHERE,
 });
 
 beforeAll(async () => {
@@ -53,9 +55,11 @@ beforeAll(async () => {
   const project = await Project.create({ workspaceId: b.workspace.id, name: 'B project', category: 'bat', createdById: b.user.id });
   const part = await Part.create({ workspaceId: b.workspace.id, projectId: project.id, name: 'B part' });
   const variant = await Variant.create({ workspaceId: b.workspace.id, partId: part.id, number: 1, document: {}, report: {}, engineVersion: 'test', authorId: b.user.id });
+  const mesh = await Mesh.create({ workspaceId: b.workspace.id, name: 'B mesh', sha256: 'x'.repeat(64), byteSize: 1, triangleCount: 1, format: 'binary', data: Buffer.from([0]), report: { fixed: [], warnings: [] }, createdById: b.user.id });
+  const study = await ScatterStudy.create({ workspaceId: b.workspace.id, variantId: variant.id, document: {}, samples: 10, seed: 1, createdById: b.user.id });
   other = {
     workspaceId: b.workspace.id, memberId: bMember!.id, invitationId: inv.body.id, materialId: material.id,
-    projectId: project.id, partId: part.id, variantId: variant.id,
+    projectId: project.id, partId: part.id, variantId: variant.id, meshId: mesh.id, studyId: study.id,
   };
   expect(await Invitation.count({ where: { id: other.invitationId } })).toBe(1);
 });
@@ -63,6 +67,12 @@ afterAll(async () => { await t.close(); });
 
 const workspaceRoutes = () => t.ctx.catalogue.routes.filter((r) => r.path.startsWith('/workspaces/:workspaceId'));
 const key = (r: { method: string; path: string }) => `${r.method} ${r.path}`;
+
+/** A valid body for the route, with B's ids where the body refers to rows. */
+function bodyFor(route: { method: string; path: string }) {
+  const body = VALID_BODIES[key(route)];
+  return body && JSON.parse(JSON.stringify(body).replace('__variant__', other.variantId));
+}
 
 function fill(path: string, ids: Record<string, string>): string {
   return '/api/v1' + path.replace(/:([A-Za-z]+)/g, (_m, name: string) => {
@@ -107,7 +117,7 @@ describe('tenancy matrix', () => {
     const owner = tokens.owner!;
     for (const route of workspaceRoutes()) {
       const url = fill(route.path, other);
-      const res = await call(route.method, url, owner.token, VALID_BODIES[key(route)]);
+      const res = await call(route.method, url, owner.token, bodyFor(route));
       expect({ route: key(route), status: res.status }).toEqual({ route: key(route), status: 404 });
     }
   });
@@ -116,7 +126,7 @@ describe('tenancy matrix', () => {
     const owner = tokens.owner!;
     for (const route of workspaceRoutes().filter((r) => /:(?!workspaceId)\w+/.test(r.path))) {
       const url = fill(route.path, { ...other, workspaceId: owner.workspaceId });
-      const res = await call(route.method, url, owner.token, VALID_BODIES[key(route)]);
+      const res = await call(route.method, url, owner.token, bodyFor(route));
       expect({ route: key(route), status: res.status }).toEqual({ route: key(route), status: 404 });
     }
     // Nothing of B changed.
@@ -125,6 +135,19 @@ describe('tenancy matrix', () => {
     expect((await Part.findByPk(other.partId))!.name).toBe('B part');
     expect((await Variant.findByPk(other.variantId))!.status).toBe('draft');
     expect((await Material.findByPk(other.materialId))!.name).toBe('B wood');
+    expect(await Mesh.count({ where: { id: other.meshId } })).toBe(1);
+    expect((await ScatterStudy.findByPk(other.studyId))!.state).toBe('queued');
+  });
+
+  it('treats ids of another workspace inside a body or query as missing', async () => {
+    const own = `/api/v1/workspaces/${tokens.owner!.workspaceId}`;
+    const token = tokens.owner!.token;
+    expect((await call('post', `${own}/scatter`, token, { variantId: other.variantId, samples: 10 })).status).toBe(404);
+    expect((await call('get', `${own}/compare?variants=${other.variantId},${other.variantId}`, token)).status).toBe(404);
+    const doc = { primitives: [{ id: 'm', shape: 'mesh', meshId: other.meshId, density: 1000 }], spin: { axis: [0, 0, 1], rate: 1 } };
+    expect((await call('post', `/api/v1/analyze?workspace=${tokens.owner!.workspaceId}`, token, doc)).status).toBe(422);
+    expect((await call('post', `/api/v1/analyze?workspace=${other.workspaceId}`, token, doc)).status).toBe(404);
+    expect(await ScatterStudy.count({ where: { variantId: other.variantId } })).toBe(1);
   });
 
   it('answers 401 for every workspace route without a token', async () => {
