@@ -2,6 +2,7 @@ import type { Role } from '@tumblewise/shared';
 import type { AppContext } from '../app-context';
 import { recordAudit } from '../audit/audit-log';
 import { Membership, Project, User, Workspace } from '../models/init-models';
+import { seedDemoDesigns } from './demo-designs';
 
 /** The invented demo workspace. Every name here is made up. */
 export const DEMO_PASSWORD = 'kestrel-demo-2026';
@@ -20,8 +21,15 @@ const DEMO_PROJECTS = [
   { name: 'Flying disc 175 g', category: 'flying-disc', notes: 'Rim-weighted ultimate disc.' },
 ] as const;
 
-/** Seeds the demo workspace once; answers whether it did (false: it was there already). */
+/** Seeds the demo workspace once, then its designs once; answers whether anything was added. */
 export async function seedDemo(ctx: AppContext): Promise<boolean> {
+  const accounts = await seedDemoAccounts(ctx);
+  const owner = await Membership.findOne({ where: { role: 'owner' }, include: [{ model: User, as: 'user', where: { email: DEMO_USERS[0].email }, required: true }, { model: Workspace, as: 'workspace', required: true }] });
+  const designs = owner ? await seedDemoDesigns(ctx, owner.workspace!) : false;
+  return accounts || designs;
+}
+
+async function seedDemoAccounts(ctx: AppContext): Promise<boolean> {
   if (await User.findOne({ where: { email: DEMO_USERS[0].email } })) return false;
   const passwordHash = await ctx.passwords.hash(DEMO_PASSWORD);
   await ctx.sequelize.transaction(async (transaction) => {
