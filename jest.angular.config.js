@@ -8,7 +8,7 @@ const aliases = {
   '^@tumblewise/api-client$': '<rootDir>/libs/api-client/src/public-api.ts',
   '^@tumblewise/ui$': '<rootDir>/libs/ui/src/public-api.ts',
   '^@tumblewise/viewer$': '<rootDir>/libs/viewer/src/public-api.ts',
-  '^three$': 'three/build/three.module.js',
+  '^three$': '<rootDir>/node_modules/three/build/three.module.js',
 };
 
 /** One jest project per app or library folder, each with its own tsconfig.spec.json and set-up file. */
@@ -25,8 +25,8 @@ function angularProject(displayName, folder) {
     testMatch: [`<rootDir>/${folder}/**/*.spec.ts`],
     setupFilesAfterEnv: [`<rootDir>/${folder}/src/test-setup.ts`],
     moduleNameMapper: aliases,
-    // three ships ESM only: let the preset's transformer process it.
-    transformIgnorePatterns: ['node_modules/(?!(.*\\.mjs$|three/|@angular/common/locales/.*\\.js$))'],
+    // three, echarts and zrender ship ESM only: let the preset's transformer process them.
+    transformIgnorePatterns: ['node_modules/(?!(.*\\.mjs$|three/|echarts/|zrender/|@angular/common/locales/.*\\.js$))'],
   };
 }
 
@@ -36,5 +36,6 @@ module.exports = {
     angularProject('admin', 'apps/admin'),
     angularProject('ui', 'libs/ui'),
     angularProject('api-client', 'libs/api-client'),
+    angularProject('viewer', 'libs/viewer'),
   ],
 };

@@ -14,3 +14,4 @@ export * from './members/members-api';
 export * from './invitations/invitations-api';
 export * from './audit/audit-api';
 export * from './projects/projects-api';
+export * from './simulation/simulation-api';
