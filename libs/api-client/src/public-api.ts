@@ -15,3 +15,7 @@ export * from './invitations/invitations-api';
 export * from './audit/audit-api';
 export * from './projects/projects-api';
 export * from './simulation/simulation-api';
+export * from './materials/materials-api';
+export * from './parts/parts-api';
+export * from './variants/variants-api';
+export * from './analysis/analysis-api';

@@ -19,3 +19,5 @@ export * from './browser/page-navigation';
 export * from './forms/focus-first-invalid';
 export * from './not-found/not-found';
 export * from './overlay/labelled-overlay-container';
+export * from './chips/verdict-chip';
+export * from './chips/status-chip';

@@ -6,6 +6,10 @@ import { requireSession } from './core/require-session';
 /** Routes of the designer app; the account screens are public, everything else needs a session. */
 export const routes: Routes = [
   { path: '', pathMatch: 'full', title: 'Projects · Tumblewise', canActivate: [requireSession], loadComponent: () => import('./features/projects/projects').then((m) => m.Projects) },
+  { path: 'projects/:projectId', title: 'Project · Tumblewise', canActivate: [requireSession], loadComponent: () => import('./features/project/project-parts').then((m) => m.ProjectParts) },
+  { path: 'projects/:projectId/parts/:partId', title: 'Part editor · Tumblewise', canActivate: [requireSession], loadComponent: () => import('./features/part-editor/part-editor').then((m) => m.PartEditor) },
+  // Compare and scatter routes go here (added by their feature): projects/:projectId/parts/:partId/compare?variants=a,b
+  // and projects/:projectId/parts/:partId/scatter?variant=id.
   { path: 'signin', title: 'Sign in · Tumblewise', loadComponent: () => import('./features/sign-in/sign-in').then((m) => m.SignIn) },
   { path: 'signup', title: 'Create a workspace · Tumblewise', canActivate: [redirectSignedIn], loadComponent: () => import('./features/sign-up/sign-up').then((m) => m.SignUp) },
   { path: 'forgot-password', title: 'Forgot password · Tumblewise', loadComponent: () => import('./features/forgot-password/forgot-password').then((m) => m.ForgotPassword) },

@@ -1,8 +1,16 @@
 import { HttpClient } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
-import type { CreateProjectBody, Project } from '@tumblewise/shared';
+import type { CreateProjectBody, GearCategory, Project } from '@tumblewise/shared';
 import { Observable } from 'rxjs';
 import { API_BASE_URL } from '../api-base-url';
+
+/** What a project update may change. */
+export interface UpdateProject {
+  name?: string;
+  category?: GearCategory;
+  notes?: string;
+  archived?: boolean;
+}
 
 /** The workspace's projects. */
 @Injectable({ providedIn: 'root' })
@@ -18,6 +26,16 @@ export class ProjectsApi {
   /** Creates a project. */
   create(workspaceId: string, body: CreateProjectBody): Observable<Project> {
     return this.http.post<Project>(this.url(workspaceId), body);
+  }
+
+  /** Loads one project. */
+  get(workspaceId: string, projectId: string): Observable<Project> {
+    return this.http.get<Project>(`${this.url(workspaceId)}/${encodeURIComponent(projectId)}`);
+  }
+
+  /** Renames, recategorises, annotates, archives or restores a project. */
+  update(workspaceId: string, projectId: string, changes: UpdateProject): Observable<Project> {
+    return this.http.patch<Project>(`${this.url(workspaceId)}/${encodeURIComponent(projectId)}`, changes);
   }
 
   private url(workspaceId: string): string {
