@@ -7,6 +7,8 @@ import { authRoutes } from './accounts/auth-routes';
 import { meRoutes } from './accounts/me-routes';
 import { analysisRoutes } from './analysis/analysis-routes';
 import { auditRoutes } from './audit/audit-routes';
+import { billingRoutes } from './billing/billing-routes';
+import { billingWebhookRoutes } from './billing/billing-webhook';
 import { healthRoutes } from './health/health-routes';
 import { apiNotFound, errorHandler } from './http/error-handler';
 import { authenticate, workspaceGate } from './http/authenticate';
@@ -19,7 +21,9 @@ import { measurementRoutes } from './measurements/measurement-routes';
 import { meshRoutes } from './meshes/mesh-routes';
 import { scatterRoutes } from './scatter/scatter-routes';
 import { partRoutes } from './parts/part-routes';
+import { operatorRoutes } from './operator/operator-routes';
 import { projectRoutes } from './projects/project-routes';
+import { settingsRoutes } from './settings/settings-routes';
 import { reviewRoutes } from './reviews/review-routes';
 import { variantRoutes } from './variants/variant-routes';
 import { serveApps } from './static/serve-apps';
@@ -44,6 +48,8 @@ export function createApp(ctx: AppContext): express.Express {
   }));
 
   const api = Router();
+  // Before the JSON parser: the signature is checked on the raw body.
+  api.use(billingWebhookRoutes(ctx));
   api.use(['/analyze', '/simulate'], express.json({ limit: ctx.config.limits.partBody }));
   api.use(express.json({ limit: ctx.config.limits.jsonBody }));
   api.use(cookieParser());
@@ -54,6 +60,7 @@ export function createApp(ctx: AppContext): express.Express {
   api.use('/invitations', invitationAcceptRoutes(ctx));
   api.use(meRoutes(ctx));
   api.use(analysisRoutes(ctx));
+  api.use('/operator', operatorRoutes(ctx));
 
   const workspace = Router({ mergeParams: true });
   workspace.use(workspaceGate);
@@ -69,6 +76,8 @@ export function createApp(ctx: AppContext): express.Express {
   measurementRoutes(ctx, workspace);
   scatterRoutes(ctx, workspace);
   exportRoutes(ctx, workspace);
+  billingRoutes(ctx, workspace);
+  settingsRoutes(ctx, workspace);
   api.use('/workspaces/:workspaceId', workspace);
 
   api.use(apiNotFound);

@@ -11,6 +11,7 @@ import { ApiCatalogue } from './http/api-catalogue';
 import { AttemptLimits } from './http/attempt-limits';
 import { Mailer } from './mail/mailer';
 import { ScatterQueue } from './scatter/scatter-queue';
+import { Workspace } from './models/init-models';
 
 /** Wires the collaborators of one server process from its configuration. */
 export function createContext(config: Config, options: { logStream?: pino.DestinationStream } = {}): AppContext {
@@ -19,6 +20,7 @@ export function createContext(config: Config, options: { logStream?: pino.Destin
     options.logStream ?? pino.destination(1),
   );
   const sequelize = createDatabase(config.databaseUrl);
+  Workspace.graceDays = config.billing.graceDays;
   const ctx = {
     config,
     logger,

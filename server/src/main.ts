@@ -14,12 +14,13 @@ export async function startServer(options: { seedDemo?: boolean } = {}) {
   const ctx = createContext(config);
   const applied = await migrate(ctx.sequelize);
   const seeded = options.seedDemo ? await seedDemo(ctx) : null;
-  await ctx.scatter.start();
   const app = createApp(ctx);
   const server = await new Promise<import('node:http').Server>((resolve, reject) => {
     const s = app.listen(config.port, config.host, () => resolve(s));
     s.once('error', reject);
   });
+  // The background-job worker starts after the port is open; studies queue meanwhile.
+  ctx.scatter.start().catch((err) => ctx.logger.error({ err }, 'the background-job worker did not start'));
   return {
     ctx, server, applied, seeded,
     stop: async () => {

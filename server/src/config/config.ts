@@ -16,6 +16,7 @@ export interface Config {
   logLevel: string;
   mail: { host: string; port: number; from: string; inboxUrl: string | null };
   payment: { apiUrl: string; secretKey: string; webhookSecret: string };
+  billing: { graceDays: number; evaluationSeats: number; trialDays: number; pricePerSeatMonthly: number; currency: string };
   auth: {
     jwtSecret: string;
     issuer: string;
@@ -88,6 +89,13 @@ export function loadConfig(env: Env = process.env): Config {
       apiUrl: env.PAYMENT_API_URL ?? 'http://127.0.0.1:4390',
       secretKey: env.PAYMENT_SECRET_KEY ?? storedSecret(dataDir, 'paymentSecretKey', () => `sk_test_${Date.now().toString(36)}local`),
       webhookSecret: env.PAYMENT_WEBHOOK_SECRET ?? storedSecret(dataDir, 'paymentWebhookSecret', () => `whsec_${Math.random().toString(36).slice(2)}${Date.now().toString(36)}`),
+    },
+    billing: {
+      graceDays: int(env, 'BILLING_GRACE_DAYS', 7, 0),
+      evaluationSeats: int(env, 'EVALUATION_SEATS', 5, 1),
+      trialDays: int(env, 'TRIAL_DAYS', 14, 0),
+      pricePerSeatMonthly: int(env, 'SEAT_PRICE_CENTS', 2400, 0),
+      currency: env.BILLING_CURRENCY ?? 'eur',
     },
     auth: {
       jwtSecret,

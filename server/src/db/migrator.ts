@@ -5,6 +5,7 @@ import * as invitations from './migrations/20261201-0002-invitations-audit';
 import * as projects from './migrations/20261201-0003-projects';
 import * as rateLimits from './migrations/20261201-0004-rate-limits';
 import * as designWorkspace from './migrations/20261201-0005-design-workspace';
+import * as billing from './migrations/20261201-0006-billing';
 
 /** Migrations in the order they run. Migrations are history: never edit one that landed, add one. */
 const MIGRATIONS = [
@@ -13,6 +14,7 @@ const MIGRATIONS = [
   { name: '20261201-0003-projects', module: projects },
   { name: '20261201-0004-rate-limits', module: rateLimits },
   { name: '20261201-0005-design-workspace', module: designWorkspace },
+  { name: '20261201-0006-billing', module: billing },
 ];
 
 export interface Migration {

@@ -40,6 +40,8 @@ export interface RouteSpec<B extends z.ZodType, Q extends z.ZodType, P extends z
   errors?: number[];
   /** Middleware run before the access check (rate limits). */
   before?: RequestHandler[];
+  /** Writes are refused in a read-only or suspended workspace, except routes marked here (paying the bill). */
+  allowWhenLocked?: boolean;
   /** Middleware run after the access check and before validation (upload parsers). */
   parsers?: RequestHandler[];
   handler: (input: RouteInput<z.output<B>, z.output<Q>, z.output<P>>, req: Request, res: Response) => Promise<unknown> | unknown;
@@ -68,6 +70,7 @@ export function apiRoute<B extends z.ZodType, Q extends z.ZodType, P extends z.Z
 
   const access: RequestHandler = (req, _res, next) => {
     checkAccess(spec.access, (req as Request & { auth?: RequestAuth }).auth ?? null, req);
+    if (spec.access.kind === 'workspace' && spec.method !== 'get' && !spec.allowWhenLocked) assertWritable(req);
     next();
   };
   const handler: RequestHandler = async (req, res) => {
@@ -102,6 +105,18 @@ function checkAccess(access: Access, auth: RequestAuth | null, req: Request): vo
     const membership = (req as Request & { membership?: { role: Parameters<typeof can>[0] } }).membership;
     if (!membership) throw AppError.notFound('Workspace');
     if (!can(membership.role, access.permission)) throw AppError.forbidden();
+  }
+}
+
+/** A suspended or read-only workspace takes no writes (exports and reads go on). */
+function assertWritable(req: Request): void {
+  const workspace = (req as Request & { membership?: { workspace: { effectiveState(): string; suspendedReason?: string | null } } }).membership?.workspace;
+  const state = workspace?.effectiveState();
+  if (state === 'suspended') {
+    throw new AppError(403, 'workspace_suspended', `This workspace is suspended by the platform${workspace?.suspendedReason ? ` (${workspace.suspendedReason})` : ''}: you can sign in and read, but not change anything.`);
+  }
+  if (state === 'read_only') {
+    throw new AppError(403, 'workspace_read_only', 'This workspace is read-only because a payment is overdue: an owner can update the payment method under Subscription. Exports still work.');
   }
 }
 

@@ -160,8 +160,26 @@ describe('tenancy matrix', () => {
 
   it('answers 401 for the signed-in routes outside workspaces without a token', async () => {
     for (const route of t.ctx.catalogue.routes.filter((r) => r.access.kind === 'user' || r.access.kind === 'operator')) {
-      const res = await call(route.method, fill(route.path, {}), undefined);
+      const res = await call(route.method, fill(route.path, other), undefined);
       expect({ route: key(route), status: res.status }).toEqual({ route: key(route), status: 401 });
+    }
+  });
+});
+
+describe('operator routes: operators only', () => {
+  it('answers 403 to every workspace role and lets an operator in', async () => {
+    const operator = await signUp(t.app, { workspaceName: 'Operator home' });
+    await User.update({ isOperator: true }, { where: { id: operator.user.id } });
+    const routes = t.ctx.catalogue.routes.filter((r) => r.access.kind === 'operator');
+    expect(routes.length).toBeGreaterThanOrEqual(4);
+    for (const route of routes) {
+      const body = route.method === 'post' ? { reason: 'matrix check' } : undefined;
+      for (const role of ROLES) {
+        const res = await call(route.method, fill(route.path, other), tokens[role]!.token, body);
+        expect({ route: key(route), role, status: res.status }).toEqual({ route: key(route), role, status: 403 });
+      }
+      const res = await call(route.method, fill(route.path, { ...other, workspaceId: NOWHERE }), operator.accessToken, body);
+      expect({ route: key(route), allowed: res.status !== 403 && res.status !== 401 }).toEqual({ route: key(route), allowed: true });
     }
   });
 });

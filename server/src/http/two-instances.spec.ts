@@ -18,7 +18,9 @@ async function startInstance(env: Record<string, string>): Promise<string> {
     env: { ...process.env, ...env, PORT: String(port), LOG_LEVEL: 'warn' }, stdio: ['ignore', 'ignore', 'inherit'],
   });
   children.push(child);
-  await waitForPort(port, 20000);
+  const exited = new Promise<never>((_, reject) => child.once('exit', (code) => reject(new Error(`the server process exited early (code ${code})`))));
+  exited.catch(() => undefined); // exiting later, at teardown, is expected
+  await Promise.race([waitForPort(port, 60000), exited]);
   return `http://127.0.0.1:${port}/api/v1`;
 }
 
@@ -26,7 +28,7 @@ beforeAll(async () => {
   const { url } = await cloneTemplateDatabase();
   const env = { DATABASE_URL: url, RATE_LIMIT_SIGNIN: '3', NODE_ENV: 'test' };
   [a, b] = await Promise.all([startInstance(env), startInstance(env)]);
-}, 60000);
+}, 90000);
 
 afterAll(async () => {
   await Promise.all(children.map((c) => new Promise((resolve) => { c.once('exit', resolve); c.kill('SIGTERM'); })));

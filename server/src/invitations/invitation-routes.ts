@@ -15,6 +15,7 @@ import { routeGroup } from '../http/api-route';
 import { membershipOf } from '../http/authenticate';
 import { Invitation, Membership, User, Workspace } from '../models/init-models';
 import { deliverInvitation } from './invitation-delivery';
+import { assertSeatsFor } from '../billing/seats';
 
 const invitationParams = z.object({ invitationId: idSchema });
 const withInviter = [{ model: User, as: 'invitedBy' }];
@@ -52,6 +53,9 @@ export function invitationRoutes(ctx: AppContext, router: Router): void {
         });
         const pending = await Invitation.findOne({ where: { workspaceId: actor.workspaceId, email: body.email, status: 'pending' }, transaction });
         if (pending) throw AppError.conflict('already_invited', `${body.email} already has a pending invitation. Re-send it instead.`, 'email');
+        // Lock the workspace row so two invitations cannot take the last seat at once.
+        const locked = (await Workspace.findByPk(actor.workspaceId, { transaction, lock: transaction.LOCK.UPDATE }))!;
+        await assertSeatsFor(locked, ctx.config.billing.evaluationSeats, 1, { transaction });
         const created = await Invitation.create({
           workspaceId: actor.workspaceId, email: body.email, role: body.role, tokenHash: hash, invitedById: auth!.user.id,
           acceptedById: null, expiresAt: new Date(Date.now() + days * 86400_000),
@@ -79,6 +83,7 @@ export function invitationRoutes(ctx: AppContext, router: Router): void {
       if (invitation.status === 'accepted' || invitation.status === 'revoked') {
         throw AppError.conflict('invitation_closed', `This invitation was ${invitation.status}; create a new one instead.`);
       }
+      if (invitation.effectiveStatus() === 'expired') await assertSeatsFor(membershipOf(req).workspace, ctx.config.billing.evaluationSeats, 1);
       const { token, hash } = newSecureToken();
       await invitation.update({ tokenHash: hash, status: 'pending', expiresAt: new Date(Date.now() + days * 86400_000) });
       await recordAudit({ workspaceId, actorId: auth!.user.id, action: 'invitation.resent', targetType: 'invitation', targetId: invitation.id, targetLabel: invitation.email });
@@ -153,7 +158,10 @@ export function invitationAcceptRoutes(ctx: AppContext): Router {
           user = await User.create({ email: invitation.email, name: body.name, passwordHash: await ctx.passwords.hash(body.password) }, { transaction });
           ({ sessionId, refreshToken } = await ctx.sessions.start(user.id, req.get('user-agent'), transaction));
         }
+        const target = (await Workspace.findByPk(invitation.workspaceId, { transaction, lock: transaction.LOCK.UPDATE }))!;
+        if (target.effectiveState() === 'suspended') throw AppError.conflict('workspace_suspended', 'This workspace is suspended; the invitation cannot be accepted now.');
         const already = await Membership.findOne({ where: { workspaceId: invitation.workspaceId, userId: user.id }, transaction });
+        if (!already) await assertSeatsFor(target, ctx.config.billing.evaluationSeats, 1, { acceptingPending: true, transaction });
         if (!already) await Membership.create({ workspaceId: invitation.workspaceId, userId: user.id, role: invitation.role }, { transaction });
         await invitation.update({ status: 'accepted', acceptedAt: new Date(), acceptedById: user.id }, { transaction });
         await recordAudit({

@@ -52,3 +52,28 @@ export function reviewRequestMail(args: { to: string; reviewerName: string; requ
     html: layout(`Review ${args.partName} ${args.variantLabel}`, lines, { label: 'Open the variant', url: args.url }, 'You receive this because you are a reviewer in this workspace.'),
   };
 }
+
+const money = (cents: number, currency: string) => new Intl.NumberFormat('en-GB', { style: 'currency', currency: currency.toUpperCase() }).format(cents / 100);
+
+/** Receipt for a paid invoice. */
+export function receiptMail(args: { to: string; workspaceName: string; amount: number; currency: string; number: string | null; url: string }): OutgoingMail {
+  const lines = [`We received ${money(args.amount, args.currency)} for the workspace "${args.workspaceName}"${args.number ? ` (invoice ${args.number})` : ''}. Thank you.`];
+  return {
+    to: args.to, subject: `Receipt: ${args.workspaceName} — ${money(args.amount, args.currency)}`,
+    text: `${lines.join('\n')}\n\nInvoices: ${args.url}`,
+    html: layout('Payment received', lines, { label: 'See invoices', url: args.url }, 'You receive this as an owner of the workspace.'),
+  };
+}
+
+/** A payment failed: the workspace is past due and turns read-only after the grace period. */
+export function paymentFailedMail(args: { to: string; workspaceName: string; readOnlyFrom: Date | null; url: string }): OutgoingMail {
+  const lines = [
+    `The latest payment for the workspace "${args.workspaceName}" failed.`,
+    args.readOnlyFrom ? `Please update the payment method before ${args.readOnlyFrom.toISOString().slice(0, 10)}; after that the workspace becomes read-only (exports keep working).` : 'Please update the payment method.',
+  ];
+  return {
+    to: args.to, subject: `Payment failed: ${args.workspaceName}`,
+    text: `${lines.join('\n')}\n\nUpdate the payment method: ${args.url}`,
+    html: layout('Payment failed', lines, { label: 'Update the payment method', url: args.url }, 'You receive this as an owner of the workspace.'),
+  };
+}

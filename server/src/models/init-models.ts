@@ -1,5 +1,6 @@
 import type { Sequelize } from 'sequelize';
 import { AuditEvent } from './audit-event';
+import { BillingEvent } from './billing-event';
 import { Invitation } from './invitation';
 import { Membership } from './membership';
 import { PasswordReset } from './password-reset';
@@ -19,7 +20,7 @@ import { Workspace } from './workspace';
 /** Initialises every model on the instance and wires the associations. */
 export function initModels(sequelize: Sequelize): void {
   for (const model of [User, Workspace, Membership, SignInSession, RefreshToken, PasswordReset, Invitation, AuditEvent, Project,
-    Material, Part, Variant, Mesh, ReviewEntry, Measurement, ScatterStudy]) {
+    Material, Part, Variant, Mesh, ReviewEntry, Measurement, ScatterStudy, BillingEvent]) {
     model.initModel(sequelize);
   }
   Workspace.hasMany(Membership, { foreignKey: 'workspaceId' });
@@ -48,4 +49,4 @@ export function initModels(sequelize: Sequelize): void {
   ScatterStudy.belongsTo(Variant, { foreignKey: 'variantId' });
 }
 
-export { AuditEvent, Invitation, Material, Measurement, Membership, Mesh, Part, PasswordReset, Project, RefreshToken, ReviewEntry, ScatterStudy, SignInSession, User, Variant, Workspace };
+export { AuditEvent, BillingEvent, Invitation, Material, Measurement, Membership, Mesh, Part, PasswordReset, Project, RefreshToken, ReviewEntry, ScatterStudy, SignInSession, User, Variant, Workspace };

@@ -12,4 +12,5 @@ export * from './reviews';
 export * from './meshes';
 export * from './measurements';
 export * from './scatter-studies';
+export * from './billing';
 export * from './part-document';

@@ -11,6 +11,8 @@ export const PERMISSIONS = {
   'workspace.read': ['owner', 'admin', 'designer', 'reviewer'],
   'workspace.delete': ['owner'],
   'billing.manage': ['owner'],
+  'billing.read': ['owner', 'admin'],
+  'settings.manage': ['owner', 'admin'],
   'members.manage': ['owner', 'admin'],
   'invitations.manage': ['owner', 'admin'],
   'audit.read': ['owner', 'admin'],
