@@ -19,3 +19,8 @@ export * from './materials/materials-api';
 export * from './parts/parts-api';
 export * from './variants/variants-api';
 export * from './analysis/analysis-api';
+export * from './billing/workspace-standing';
+export * from './billing/billing-api';
+export * from './settings/settings-api';
+export * from './operator/operator-api';
+export * from './materials/material-library-api';

@@ -21,3 +21,5 @@ export * from './not-found/not-found';
 export * from './overlay/labelled-overlay-container';
 export * from './chips/verdict-chip';
 export * from './chips/status-chip';
+export * from './workspace-state-banner/workspace-notice';
+export * from './workspace-state-banner/workspace-state-banner';

@@ -1,7 +1,10 @@
 import { AUDIT_ACTIONS } from '@tumblewise/shared';
 
-/** How each audit action is written on screen; unknown actions show their raw name. */
-export const ACTION_LABELS: Record<(typeof AUDIT_ACTIONS)[number], string> = {
+/** The audit filter value that selects every billing event (the server filters by this prefix). */
+export const BILLING_ACTION_PREFIX = 'billing.';
+
+/** How each audit action is written on screen; unknown actions are written from their name. */
+export const ACTION_LABELS: Record<(typeof AUDIT_ACTIONS)[number], string> & Record<string, string> = {
   'workspace.created': 'Workspace created',
   'member.role_changed': 'Role changed',
   'member.removed': 'Member removed',
@@ -10,9 +13,47 @@ export const ACTION_LABELS: Record<(typeof AUDIT_ACTIONS)[number], string> = {
   'invitation.revoked': 'Invitation revoked',
   'invitation.accepted': 'Invitation accepted',
   'invitation.delivery_failed': 'Invitation e-mail failed',
+  'billing.subscription_started': 'Subscription started',
+  'billing.seats_changed': 'Seats changed',
+  'billing.subscription_cancelled': 'Subscription set to end',
+  'billing.subscription_resumed': 'Subscription resumed',
+  'billing.subscription_ended': 'Subscription ended',
+  'billing.payment_method_updated': 'Payment method changed',
+  'billing.invoice_paid': 'Invoice paid',
+  'billing.payment_failed': 'Payment failed',
+  'billing.past_due': 'Workspace past due',
+  'billing.read_only': 'Workspace made read-only',
+  'billing.restored': 'Workspace restored after payment',
+  'workspace.suspended': 'Workspace suspended',
+  'workspace.restored': 'Workspace restored',
+  'workspace.settings_changed': 'Settings changed',
+  'material.created': 'Material added',
+  'material.updated': 'Material changed',
+  'material.deleted': 'Material deleted',
+  'variant.saved': 'Variant saved',
+  'review.requested': 'Sign-off requested',
+  'review.approved': 'Variant approved',
+  'review.changes_requested': 'Changes requested',
+  'review.commented': 'Sign-off comment',
+  'mesh.uploaded': 'Mesh uploaded',
+  'measurements.imported': 'Measurements imported',
+  'project.archived': 'Project archived',
+  'project.restored': 'Project restored',
 };
 
-/** The label of an action name. */
+/** The actions offered in the filter, in the order of the table above. */
+export const FILTER_ACTIONS: readonly string[] = [...new Set([...AUDIT_ACTIONS, ...Object.keys(ACTION_LABELS)])];
+
+/**
+ * The label of an action name. An action without a label of its own is written from its name:
+ * `billing.coupon_applied` → "Billing: coupon applied".
+ */
 export function actionLabel(action: string): string {
-  return (ACTION_LABELS as Record<string, string>)[action] ?? action;
+  if (action === BILLING_ACTION_PREFIX) return 'Any billing event';
+  const known = ACTION_LABELS[action];
+  if (known) return known;
+  const [area, ...rest] = action.split('.');
+  if (!area || !rest.length) return action;
+  const subject = area.charAt(0).toUpperCase() + area.slice(1);
+  return `${subject}: ${rest.join(' ').replace(/_/g, ' ')}`;
 }

@@ -20,10 +20,10 @@ import {
   MatTable,
 } from '@angular/material/table';
 import { AuditApi, MembersApi, toApiError, WorkspaceContext } from '@tumblewise/api-client';
-import { AUDIT_ACTIONS, type AuditEvent } from '@tumblewise/shared';
+import type { AuditEvent } from '@tumblewise/shared';
 import { EmptyState, ErrorBanner, FieldErrorPipe, LoadingState, PageHeader } from '@tumblewise/ui';
 import { debounceTime, distinctUntilChanged, map, tap } from 'rxjs';
-import { actionLabel } from './action-labels';
+import { actionLabel, BILLING_ACTION_PREFIX, FILTER_ACTIONS } from './action-labels';
 import { rangeIsReversed, toAuditQuery, type AuditFilterValue } from './audit-filter';
 
 function rangeInOrder(group: AbstractControl): ValidationErrors | null {
@@ -73,7 +73,8 @@ export class Audit {
   private readonly auditApi = inject(AuditApi);
   private readonly membersApi = inject(MembersApi);
 
-  protected readonly actions = AUDIT_ACTIONS;
+  protected readonly actions = FILTER_ACTIONS;
+  protected readonly billingPrefix = BILLING_ACTION_PREFIX;
   protected readonly actionLabel = actionLabel;
   protected readonly columns = ['at', 'action', 'actor', 'target', 'details'];
   protected readonly pageSizes = [10, 25, 50, 100];
@@ -119,6 +120,14 @@ export class Audit {
   protected changePage(event: PageEvent): void {
     this.pageSize.set(event.pageSize);
     this.page.set(event.pageIndex + 1);
+  }
+
+  /** Whether the quick filter for billing events is on. */
+  protected readonly billingOnly = computed(() => this.filterValue().action === BILLING_ACTION_PREFIX);
+
+  /** Shows only billing events (every action under `billing.`), or every action again. */
+  protected toggleBillingEvents(): void {
+    this.filterForm.controls.action.setValue(this.billingOnly() ? '' : BILLING_ACTION_PREFIX);
   }
 
   /** Empties every filter field. */
