@@ -1,3 +1,4 @@
+import { randomBytes } from 'node:crypto';
 import path from 'node:path';
 import { storedSecret } from '../../server/src/config/secret-store';
 import { MailCatcher } from './mail-catcher';
@@ -34,10 +35,13 @@ export async function startLocalServices(options: {
   mailDir?: string;
   throwaway?: boolean;
   database: string;
+  /** Where the payment fake delivers provider events (the server's webhook route). */
+  webhookUrl?: string;
 }): Promise<LocalServices> {
   const { ports } = options;
   const data = dataDir();
   const password = storedSecret(data, 'postgresPassword');
+  const webhookSecret = storedSecret(data, 'paymentWebhookSecret', () => `whsec_${randomBytes(24).toString('base64url')}`);
   const cluster = new PostgresCluster({
     dataDir: options.clusterDir ?? path.join(clusterParentDir(), 'postgres'),
     port: ports.postgres, user: 'tumblewise', password, throwaway: options.throwaway,
@@ -54,7 +58,7 @@ export async function startLocalServices(options: {
     cluster.start();
     await createDatabaseIfMissing(cluster.url('postgres'), options.database);
     await mail.start();
-    payment = await startPaymentFake(ports.payment);
+    payment = await startPaymentFake(ports.payment, { webhookUrl: options.webhookUrl, webhookSecret });
   } catch (err) {
     // Leave nothing running behind a failed start.
     await mail.stop().catch(() => undefined);
@@ -71,6 +75,7 @@ export async function startLocalServices(options: {
       SMTP_PORT: String(ports.smtp),
       MAIL_INBOX_URL: mail.inboxUrl,
       PAYMENT_API_URL: started.url,
+      PAYMENT_WEBHOOK_SECRET: webhookSecret,
       DATA_DIR: data,
     },
     stop: async () => {

@@ -13,6 +13,7 @@ async function main(): Promise<void> {
   const services = await startLocalServices({
     ports: { postgres: num('TUMBLEWISE_PG_PORT', 54329), smtp: num('SMTP_PORT', 4325), mailWeb: num('MAIL_WEB_PORT', 4380), payment: num('PAYMENT_PORT', 4390) },
     database: 'tumblewise',
+    webhookUrl: `http://127.0.0.1:${port}/api/v1/billing/webhook`,
   });
   let stopping = false;
   const stopServices = async () => { if (!stopping) { stopping = true; await services.stop(); } };

@@ -16,11 +16,12 @@ const projectRoot = path.resolve(__dirname, '../..');
 export default async function globalSetup(): Promise<void> {
   const root = mkdtempSync(path.join(os.tmpdir(), 'tumblewise-e2e-'));
   chmodSync(root, 0o755);
+  const port = await freePort();
   const services = await startLocalServices({
     ports: { postgres: await freePort(), smtp: await freePort(), mailWeb: await freePort(), payment: await freePort() },
     clusterDir: path.join(root, 'postgres'), mailDir: path.join(root, 'maildev'), throwaway: true, database: 'tumblewise_e2e',
+    webhookUrl: `http://127.0.0.1:${port}/api/v1/billing/webhook`,
   });
-  const port = await freePort();
   const env = {
     ...process.env, ...services.env, DATA_DIR: path.join(root, 'data'), PORT: String(port), NODE_ENV: 'test', BCRYPT_COST: '4',
     LOG_LEVEL: 'warn', SEED_DEMO: 'true', RATE_LIMIT_SIGNIN: '1000', RATE_LIMIT_SIGNUP: '1000', RATE_LIMIT_PASSWORD_RESET: '1000',
@@ -37,5 +38,6 @@ export default async function globalSetup(): Promise<void> {
   }
   process.env.E2E_BASE_URL = `http://127.0.0.1:${port}`;
   process.env.MAIL_INBOX_URL = services.mail.inboxUrl;
+  process.env.PAYMENT_API_URL = services.paymentUrl;
   (globalThis as { __E2E__?: E2eRunning }).__E2E__ = { services, server, root };
 }

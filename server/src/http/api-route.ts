@@ -75,7 +75,9 @@ export function apiRoute<B extends z.ZodType, Q extends z.ZodType, P extends z.Z
   };
   const handler: RequestHandler = async (req, res) => {
     const auth = (req as Request & { auth?: RequestAuth }).auth ?? null;
-    const { workspaceId: _w, ...ownParams } = req.params as Record<string, string>;
+    // The workspace gate already checked :workspaceId of workspace routes; other routes keep it.
+    const { workspaceId: _w, ...rest } = req.params as Record<string, string>;
+    const ownParams = spec.access.kind === 'workspace' ? rest : (req.params as Record<string, string>);
     const input = {
       body: spec.body && spec.bodyValidatedBy !== 'engine' ? parseOrThrow(spec.body, req.body, 'body') : req.body,
       query: spec.query ? parseOrThrow(spec.query, req.query, 'query') : undefined,
