@@ -25,12 +25,5 @@ export class EngineInputError extends Error {
   }
 }
 
-/** Formats a zod-style path (['primitives', 1, 'radius']) as `primitives[1].radius`. */
-export function formatPath(path: readonly PropertyKey[]): string {
-  let s = '';
-  for (const k of path) {
-    if (typeof k === 'number') s += `[${k}]`;
-    else s += s ? `.${String(k)}` : String(k);
-  }
-  return s;
-}
+/** Formats a zod-style path (['primitives', 1, 'radius']) as `primitives[1].radius` (the API's field names). */
+export { formatJsonPath as formatPath } from '../../schemas/json-path';
