@@ -8,8 +8,10 @@ export const routes: Routes = [
   { path: '', pathMatch: 'full', title: 'Projects · Tumblewise', canActivate: [requireSession], loadComponent: () => import('./features/projects/projects').then((m) => m.Projects) },
   { path: 'projects/:projectId', title: 'Project · Tumblewise', canActivate: [requireSession], loadComponent: () => import('./features/project/project-parts').then((m) => m.ProjectParts) },
   { path: 'projects/:projectId/parts/:partId', title: 'Part editor · Tumblewise', canActivate: [requireSession], loadComponent: () => import('./features/part-editor/part-editor').then((m) => m.PartEditor) },
-  // Compare and scatter routes go here (added by their feature): projects/:projectId/parts/:partId/compare?variants=a,b
-  // and projects/:projectId/parts/:partId/scatter?variant=id.
+  // Compare, scatter study and the review e-mail's link.
+  { path: 'projects/:projectId/parts/:partId/compare', title: 'Compare variants · Tumblewise', canActivate: [requireSession], loadComponent: () => import('./features/compare/compare').then((m) => m.Compare) },
+  { path: 'projects/:projectId/parts/:partId/scatter', title: 'Scatter study · Tumblewise', canActivate: [requireSession], loadComponent: () => import('./features/scatter/scatter-study').then((m) => m.ScatterStudyPage) },
+  { path: 'review/:variantId', title: 'Open for review · Tumblewise', canActivate: [requireSession], loadComponent: () => import('./features/review-link/review-link').then((m) => m.ReviewLink) },
   { path: 'signin', title: 'Sign in · Tumblewise', loadComponent: () => import('./features/sign-in/sign-in').then((m) => m.SignIn) },
   { path: 'signup', title: 'Create a workspace · Tumblewise', canActivate: [redirectSignedIn], loadComponent: () => import('./features/sign-up/sign-up').then((m) => m.SignUp) },
   { path: 'forgot-password', title: 'Forgot password · Tumblewise', loadComponent: () => import('./features/forgot-password/forgot-password').then((m) => m.ForgotPassword) },

@@ -18,7 +18,7 @@ import {
 import { rxResource } from '@angular/core/rxjs-interop';
 import { MatButton } from '@angular/material/button';
 import { MatButtonToggle, MatButtonToggleGroup } from '@angular/material/button-toggle';
-import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
+import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatSlider, MatSliderThumb } from '@angular/material/slider';
 import { SimulationApi, toApiError } from '@tumblewise/api-client';
@@ -68,7 +68,6 @@ const READOUT_INTERVAL_MS = 100;
     MatLabel,
     MatInput,
     MatHint,
-    MatError,
     MatSuffix,
     MatSlider,
     MatSliderThumb,
