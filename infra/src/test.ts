@@ -25,7 +25,7 @@ const steps: Step[] = [
   { name: 'type-check (admin app, templates)', run: () => node([bin('@angular/compiler-cli', 'bundles/src/bin/ngc.js'), '-p', 'apps/admin/tsconfig.app.json', '--noEmit']) },
   {
     name: 'type-check (Angular unit tests)',
-    run: () => ['apps/designer', 'apps/admin', 'libs/ui', 'libs/api-client'].every((dir) => node([bin('typescript', 'bin/tsc'), '-p', `${dir}/tsconfig.spec.json`, '--noEmit'])),
+    run: () => ['apps/designer', 'apps/admin', 'libs/ui', 'libs/api-client', 'libs/viewer'].every((dir) => node([bin('typescript', 'bin/tsc'), '-p', `${dir}/tsconfig.spec.json`, '--noEmit'])),
   },
   { name: 'shared and server suites (jest)', run: () => jest('jest.config.js', extraArgs) },
   { name: 'Angular unit tests (jest, jsdom)', run: () => jest('jest.angular.config.js', extraArgs) },
