@@ -13,9 +13,9 @@ export interface OperatorWorkspacesQuery {
   order?: 'asc' | 'desc';
 }
 
-/** The platform's health answer: an overall status, service states and whatever else the server reports. */
+/** The platform's health answer: service states (flat or under `services`), an overall status when given, and other figures. */
 export interface PlatformHealth {
-  status: string;
+  status?: string;
   checkedAt?: string;
   [key: string]: unknown;
 }

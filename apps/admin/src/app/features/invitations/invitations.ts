@@ -6,6 +6,7 @@ import { MatButton } from '@angular/material/button';
 import { MatError, MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
+import { RouterLink } from '@angular/router';
 import {
   MatCell,
   MatCellDef,
@@ -42,6 +43,7 @@ import { deliveryLabel, mayResend, mayRevoke, STATUS_LABELS } from './invitation
   imports: [
     DatePipe,
     ReactiveFormsModule,
+    RouterLink,
     MatFormField,
     MatLabel,
     MatError,
@@ -101,6 +103,10 @@ export class Invitations {
   });
   protected readonly submitting = signal(false);
   protected readonly formError = signal<string | null>(null);
+  /** True after the server refused an invitation because every seat is taken. */
+  protected readonly seatLimitReached = signal(false);
+  /** Owners may buy seats; admins are told to ask one. */
+  protected readonly mayBuySeats = computed(() => can(this.workspace.role(), 'billing.manage'));
   /** What the last invitation or re-send did, for the status line. */
   protected readonly notice = signal<string | null>(null);
   protected readonly actionError = signal<string | null>(null);
@@ -110,6 +116,7 @@ export class Invitations {
   protected sendInvitation(formDirective: FormGroupDirective): void {
     const workspaceId = this.workspace.workspaceId();
     this.formError.set(null);
+    this.seatLimitReached.set(false);
     this.notice.set(null);
     if (!workspaceId) return;
     if (this.form.invalid) {
@@ -138,6 +145,7 @@ export class Invitations {
           ((fault.code === 'already_member' || fault.code === 'already_invited') &&
             applyServerError(this.form, { field: 'email', message: fault.message }));
         if (!mapped) this.formError.set(fault.message);
+        this.seatLimitReached.set(fault.code === 'seat_limit');
       },
     });
   }

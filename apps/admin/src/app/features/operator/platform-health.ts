@@ -6,21 +6,47 @@ import { OperatorApi, toApiError, type PlatformHealth as Health } from '@tumblew
 import { ErrorBanner, LoadingState, PageHeader } from '@tumblewise/ui';
 import { OperatorTabs } from './operator-tabs';
 
-/** A service line of the health answer. */
-interface ServiceLine {
+/** One line of the health page: a name, its value, and whether it is a service that is up. */
+export interface HealthLine {
   name: string;
   value: string;
   up: boolean | null;
 }
 
-const SERVICE_NAMES: Record<string, string> = { database: 'Database', mail: 'Mail server', payment: 'Payment provider', jobs: 'Job queue', compute: 'Compute workers' };
+/** The health page's content: overall status, the services, and groups of figures. */
+export interface HealthView {
+  status: 'ok' | 'degraded' | 'unavailable';
+  checkedAt: string | null;
+  services: HealthLine[];
+  groups: { title: string; lines: HealthLine[] }[];
+}
 
-/** The services' answers under the overall status: `up`/`down` entries first, other figures after. */
-export function healthLines(health: Health): ServiceLine[] {
-  return Object.entries(health)
-    .filter(([key, value]) => key !== 'status' && key !== 'checkedAt' && key !== 'error' && (typeof value === 'string' || typeof value === 'number' || typeof value === 'boolean'))
-    .map(([key, value]) => ({ name: SERVICE_NAMES[key] ?? key, value: String(value), up: value === 'up' ? true : value === 'down' ? false : null }))
-    .sort((a, b) => Number(a.up === null) - Number(b.up === null));
+const NAMES: Record<string, string> = {
+  database: 'Database', mail: 'Mail server', payment: 'Payment provider', workspacesByState: 'Workspaces by state', studies: 'Scatter studies in the queue',
+  process: 'Server process', uptimeSeconds: 'Uptime (s)', rssMegabytes: 'Memory (MB)', active: 'Active', past_due: 'Past due', read_only: 'Read-only',
+  suspended: 'Suspended', queued: 'Queued', running: 'Running',
+};
+const nameOf = (key: string) => NAMES[key] ?? key;
+const isPlain = (value: unknown) => typeof value === 'string' || typeof value === 'number' || typeof value === 'boolean';
+const line = (key: string, value: unknown): HealthLine => ({ name: nameOf(key), value: String(value), up: value === 'up' ? true : value === 'down' ? false : null });
+
+/**
+ * Reads either health answer: the operator's (`services` plus groups of figures) or the public
+ * one (flat `up`/`down` entries and a `status`). Without a status, it follows from the services:
+ * the database down is unavailable, any other service down is degraded.
+ */
+export function healthView(health: Health): HealthView {
+  const services = health['services'] && typeof health['services'] === 'object' ? (health['services'] as Record<string, unknown>) : health;
+  const serviceLines = Object.entries(services)
+    .filter(([key, value]) => (value === 'up' || value === 'down') && key !== 'status')
+    .map(([key, value]) => line(key, value));
+  const groups = Object.entries(health)
+    .filter(([key, value]) => key !== 'services' && value && typeof value === 'object' && !Array.isArray(value) && key !== 'error')
+    .map(([key, value]) => ({ title: nameOf(key), lines: Object.entries(value as Record<string, unknown>).filter(([, v]) => isPlain(v)).map(([k, v]) => line(k, v)) }));
+  const given = health.status;
+  const derived = serviceLines.some((l) => l.name === nameOf('database') && l.up === false) ? 'unavailable' : serviceLines.some((l) => l.up === false) ? 'degraded' : 'ok';
+  const status = given === 'ok' || given === 'degraded' || given === 'unavailable' ? given : derived;
+  return { status, checkedAt: typeof health.checkedAt === 'string' ? health.checkedAt : null, services: serviceLines, groups };
 }
 
 /** Whether the platform's services answer. */
@@ -36,13 +62,14 @@ export function healthLines(health: Health): ServiceLine[] {
           <tw-loading-state label="Checking the services…" />
         } @else if (loadError(); as message) {
           <tw-error-banner [message]="message" [retryable]="true" (retry)="recheck()" />
-        } @else if (health.value(); as h) {
+        } @else if (view(); as h) {
           <p class="tw-overall" [class.tw-bad]="h.status !== 'ok'" data-testid="health-status" [attr.data-status]="h.status">
             <span class="material-icons" aria-hidden="true">{{ h.status === 'ok' ? 'check_circle' : 'warning' }}</span>
             {{ h.status === 'ok' ? 'All services answer' : h.status === 'degraded' ? 'Degraded: some services do not answer' : 'Unavailable' }}
           </p>
+          <h2>Services</h2>
           <ul class="tw-services" aria-label="Services">
-            @for (line of lines(); track line.name) {
+            @for (line of h.services; track line.name) {
               <li data-testid="health-service" [attr.data-up]="line.up">
                 <span class="material-icons" aria-hidden="true">{{ line.up === true ? 'check' : line.up === false ? 'close' : 'info' }}</span>
                 <span class="tw-service-name">{{ line.name }}</span>
@@ -50,6 +77,21 @@ export function healthLines(health: Health): ServiceLine[] {
               </li>
             }
           </ul>
+          @for (group of h.groups; track group.title) {
+            <h2>{{ group.title }}</h2>
+            @if (group.lines.length) {
+              <ul class="tw-services" [attr.aria-label]="group.title">
+                @for (line of group.lines; track line.name) {
+                  <li data-testid="health-figure">
+                    <span class="tw-service-name">{{ line.name }}</span>
+                    <span>{{ line.value }}</span>
+                  </li>
+                }
+              </ul>
+            } @else {
+              <p class="tw-muted">None.</p>
+            }
+          }
           @if (h.checkedAt) {
             <p class="tw-muted">Checked {{ h.checkedAt | date: 'medium' }}</p>
           }
@@ -84,6 +126,10 @@ export function healthLines(health: Health): ServiceLine[] {
         color: var(--mat-sys-error);
       }
     }
+    h2 {
+      font: var(--mat-sys-title-small);
+      margin: 16px 0 4px;
+    }
     .tw-service-name {
       flex: 1;
     }
@@ -100,9 +146,9 @@ export class PlatformHealth {
     const error = this.health.error();
     return error ? toApiError(error).message : null;
   });
-  protected readonly lines = computed(() => {
+  protected readonly view = computed(() => {
     const value = this.health.value();
-    return value ? healthLines(value) : [];
+    return value ? healthView(value) : null;
   });
 
   /** Asks the services again. */

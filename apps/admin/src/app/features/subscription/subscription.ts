@@ -15,7 +15,7 @@ import { filter, switchMap } from 'rxjs';
 import { formatMoney } from '../../core/money';
 import { workspaceStateLabel } from '../../core/workspace-state-labels';
 import { CardForm } from './card-form/card-form';
-import { seatCountValidator, seatHoldersText, seatsInUse } from './seat-rules';
+import { seatCountValidator, seatHoldersClause, seatsInUse } from './seat-rules';
 import { cardBrandLabel, SUBSCRIPTION_STATUS_LABELS } from './subscription-labels';
 
 type Busy = 'buy' | 'seats' | 'card' | 'cancel' | 'resume' | null;
@@ -54,7 +54,7 @@ export class Subscription {
   protected readonly statusLabels = SUBSCRIPTION_STATUS_LABELS;
   protected readonly stateLabel = workspaceStateLabel;
   protected readonly brandLabel = cardBrandLabel;
-  protected readonly holdersText = seatHoldersText;
+  protected readonly holdersClause = seatHoldersClause;
 
   protected readonly billing = rxResource({
     params: () => this.workspace.workspaceId() ?? undefined,
@@ -68,7 +68,7 @@ export class Subscription {
   protected readonly mayManage = computed(() => can(this.workspace.role(), 'billing.manage'));
   protected readonly inUse = computed(() => {
     const seats = this.billing.value()?.seats;
-    return seats ? { count: seatsInUse(seats), holders: seatHoldersText(seats) } : null;
+    return seats ? { count: seatsInUse(seats), clause: seatHoldersClause(seats) } : null;
   });
   /** The plan shown: the subscribed one, else the first of the catalogue (what a purchase would buy). */
   protected readonly shownPlan = computed<Plan | null>(() => {
