@@ -75,7 +75,7 @@ describe('Compare', () => {
   it('compares the variants of the address against its baseline, in display units', async () => {
     await open(`?variants=${V1.id},${V2.id}&baseline=${V1.id}`);
     const headers = Array.from(host.querySelectorAll('[data-testid="compare-column"]')).map((th) => th.textContent!.replace(/\s+/g, ' ').trim());
-    expect(headers).toEqual(['v1 first cut baseline', 'v2 longer throat']);
+    expect(headers).toEqual(['v1 first cut baselinepicture_as_pdf PDF', 'v2 longer throat picture_as_pdf PDF']);
     expect(cells('mass')).toEqual(['250 g', '300 g +50 g (+20 %)']);
     // 2.5e-3 kg·m² = 25,000 g·cm²; +0.5e-3 kg·m² = +5,000 g·cm² = +25 %.
     expect(cells('I1')).toEqual(['20,000 g·cm²', '25,000 g·cm² +5,000 g·cm² (+25 %)']);
@@ -124,6 +124,21 @@ describe('Compare', () => {
     expect(fetches[0].url).toBe(`${BASE}/compare.csv?variants=${V1.id},${V2.id}&baseline=${V2.id}`);
     expect((fetches[0].init!.headers as Record<string, string>)['Authorization']).toBe('Bearer token-one');
     expect(saved).toEqual(['Practice-racket-comparison.csv']);
+    click.mockRestore();
+  });
+
+  it('downloads one variant’s spin report as PDF', async () => {
+    await open(`?variants=${V1.id},${V2.id}`);
+    fetchAnswer = async () => ({ ok: true, status: 200, blob: async () => new Blob(['%PDF-1.7'], { type: 'application/pdf' }) }) as Response;
+    const saved: string[] = [];
+    URL.createObjectURL = jest.fn(() => 'blob:pdf');
+    URL.revokeObjectURL = jest.fn();
+    const click = jest.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(function (this: HTMLAnchorElement) { saved.push(this.download); });
+    testId('compare-pdf-1')!.click();
+    await new Promise((r) => setTimeout(r, 0));
+    await harness.fixture.whenStable();
+    expect(fetches.map((f) => f.url)).toEqual([`${BASE}/variants/${V2.id}/export.pdf`]);
+    expect(saved).toEqual(['Practice-racket-v2-longer-throat-spin-report.pdf']);
     click.mockRestore();
   });
 

@@ -174,6 +174,22 @@ export class Compare {
     }
   }
 
+  /** Downloads one variant's spin report as a PDF (made on the server). */
+  protected async downloadPdf(variantId: string, label: string): Promise<void> {
+    const workspaceId = this.workspace.workspaceId();
+    if (!workspaceId) return;
+    this.downloadError.set(null);
+    this.downloading.set(true);
+    const name = `${this.part.hasValue() ? this.part.value().name : 'part'} ${label} spin report`.replace(/[^A-Za-z0-9._-]+/g, '-');
+    try {
+      await this.downloads.downloadFile(`${this.apiBase}/workspaces/${encodeURIComponent(workspaceId)}/variants/${encodeURIComponent(variantId)}/export.pdf`, `${name}.pdf`);
+    } catch (error) {
+      this.downloadError.set(`The PDF could not be downloaded: ${toApiError(error).message}`);
+    } finally {
+      this.downloading.set(false);
+    }
+  }
+
   /** Loads the variants again after a failure. */
   protected reload(): void {
     this.part.reload();
