@@ -53,3 +53,17 @@ export function issueAt(issues: FieldIssues, path: string): string | null {
   const parent = path.replace(/\[\d+\]$/, '');
   return parent !== path ? (issues[parent] ?? null) : null;
 }
+
+/** A copy of the document with each known material reference replaced by the material's density. */
+export function withMaterialDensities(doc: DraftDocument, materials: ReadonlyMap<string, Material>): DraftDocument {
+  if (!doc.primitives.some((p) => typeof p.materialId === 'string' && materials.has(p.materialId))) return doc;
+  return {
+    ...doc,
+    primitives: doc.primitives.map((p) => {
+      const material = typeof p.materialId === 'string' ? materials.get(p.materialId) : undefined;
+      if (!material) return p;
+      const { materialId: _replaced, ...rest } = p;
+      return { ...rest, density: material.density };
+    }),
+  };
+}

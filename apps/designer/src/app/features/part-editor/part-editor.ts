@@ -6,13 +6,13 @@ import { MatTooltip } from '@angular/material/tooltip';
 import { RouterLink } from '@angular/router';
 import { AnalysisApi, MaterialsApi, PartsApi, ProjectsApi, toApiError, VariantsApi, WorkspaceContext, type ApiError } from '@tumblewise/api-client';
 import type { SpinReport } from '@tumblewise/engine';
-import type { Material, Part, PrimitiveShape, Variant } from '@tumblewise/shared';
+import type { Material, Part, PartDocument, PrimitiveShape, Variant } from '@tumblewise/shared';
 import { EmptyState, ErrorBanner, LoadingState, PageHeader } from '@tumblewise/ui';
 import { defer, filter, map, Subject } from 'rxjs';
 import { SpinReportPanel } from '../spin-report/spin-report-panel';
 import { VariantHistory } from '../variant-history/variant-history';
 import { autosaveDrafts } from './autosave-drafts';
-import { analysisRequest, documentIssues, messageForField, type FieldIssues } from './document-issues';
+import { analysisRequest, documentIssues, messageForField, withMaterialDensities, type FieldIssues } from './document-issues';
 import { toDraftDocument, type DraftDocument } from './draft-document';
 import { IDLE_ANALYSIS, liveAnalysis, type LiveAnalysis } from './live-analysis';
 import { PartEditorState } from './part-editor-state';
@@ -145,6 +145,12 @@ export class PartEditor {
   );
   protected readonly issueCount = computed(() => Object.keys(this.issues()).length);
   protected readonly shownReport = computed<SpinReport | null>(() => (this.openedVariant()?.report as SpinReport | undefined) ?? this.analysis().report);
+  /** The document the shown report belongs to (valid: it was analysed or saved). */
+  /** Material references become densities, so the viewer's motion request needs no workspace lookup. */
+  protected readonly shownDocument = computed<PartDocument | null>(() => {
+    const doc = (this.openedVariant()?.document ?? this.analysis().analysed) as DraftDocument | null;
+    return doc ? (withMaterialDensities(doc, this.materialMap()) as unknown as PartDocument) : null;
+  });
   protected readonly shownRate = computed(() => {
     const opened = this.openedVariant();
     const doc = opened ? (opened.document as DraftDocument) : this.analysis().analysed;

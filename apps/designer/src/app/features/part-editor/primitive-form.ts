@@ -102,6 +102,11 @@ export class PrimitiveForm {
     return `primitive-${name}`;
   }
 
+  /** A material's density scatter in per cent, to one decimal. */
+  protected tolerancePercent(material: Material): number {
+    return Math.round(material.densityTolerance * 1000) / 10;
+  }
+
   /** Ends the current undo step. */
   protected endEdit(): void {
     this.editEnded.emit();

@@ -1,43 +1,49 @@
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
 import type { SpinReport } from '@tumblewise/engine';
-import type { DraftDocument } from './draft-document';
+import type { PartDocument } from '@tumblewise/shared';
+import { TwPartViewer } from '@tumblewise/viewer';
 
 /**
- * SLOT FOR THE 3-D VIEWER AND TUMBLE PREVIEW.
- * The viewer is `TwPartViewer` from `@tumblewise/viewer` (libs/viewer/src/public-api.ts), inputs
- * `document` and `report`, kept in its own lazy chunk with three.js. Until that library is in the
- * tree this slot shows a placeholder; when it is, the template becomes:
- *
- *   @defer (on viewport) { <tw-part-viewer [document]="document()" [report]="report()" /> }
- *   @placeholder { …the placeholder below… } @loading { …"Loading the 3-D view…"… }
+ * The slot of the 3-D view and tumble preview (`TwPartViewer` from `@tumblewise/viewer`). The viewer
+ * and three.js load in their own chunk when the slot scrolls into view (@defer), and only once there
+ * is a report: it draws the document that report was computed from, so picture and figures agree.
  */
 @Component({
   selector: 'tw-viewer-slot',
   changeDetection: ChangeDetectionStrategy.OnPush,
+  imports: [TwPartViewer],
   template: `
     <section class="tw-viewer-slot" aria-label="3-D view" data-testid="viewer-slot">
       @defer (on viewport) {
-        <div class="tw-placeholder" data-testid="viewer-placeholder">
-          <span class="material-icons" aria-hidden="true">view_in_ar</span>
-          <p>The 3-D view and tumble preview of {{ document().primitives.length }} primitive{{ document().primitives.length === 1 ? '' : 's' }} appears here.</p>
-        </div>
+        @if (document() && report()) {
+          <tw-part-viewer [document]="document()!" [report]="report()!" />
+        } @else {
+          <div class="tw-placeholder" data-testid="viewer-placeholder">
+            <span class="material-icons" aria-hidden="true">view_in_ar</span>
+            <p>The 3-D view and tumble preview appear once the part has a spin report.</p>
+          </div>
+        }
       } @placeholder {
         <div class="tw-placeholder"><p>3-D view</p></div>
+      } @loading {
+        <div class="tw-placeholder"><p>Loading the 3-D view…</p></div>
       }
     </section>
   `,
   styles: `
     .tw-viewer-slot {
-      border: 1px dashed var(--mat-sys-outline-variant);
+      border: 1px solid var(--mat-sys-outline-variant);
       border-radius: 12px;
       min-height: 160px;
-      display: grid;
-      place-items: center;
       background: var(--mat-sys-surface-container-low);
       color: var(--mat-sys-on-surface-variant);
+      overflow: hidden;
     }
     .tw-placeholder {
+      display: grid;
+      place-items: center;
       text-align: center;
+      min-height: 160px;
       padding: 16px;
     }
     .material-icons {
@@ -46,8 +52,8 @@ import type { DraftDocument } from './draft-document';
   `,
 })
 export class ViewerSlot {
-  /** The working part document (SI). */
-  readonly document = input.required<DraftDocument>();
-  /** The newest spin report, or null. */
+  /** The (valid) part document the report was computed from, or null. */
+  readonly document = input<PartDocument | null>(null);
+  /** Its spin report, or null. */
   readonly report = input<SpinReport | null>(null);
 }

@@ -55,6 +55,12 @@ export class SpinReportPanel {
   });
   protected readonly rateShown = computed(() => (this.rate() === null ? null : showRate(this.rate()!)));
   protected readonly turns = computed(() => turnsBeforeFlip(this.report()?.spin.flipTime ?? null, this.rate()));
+  protected readonly turnsText = computed(() => {
+    const n = this.turns();
+    if (n === null) return '';
+    const shown = formatFigure(n, 2);
+    return `${shown} ${shown === '1' ? 'turn' : 'turns'}`;
+  });
   protected readonly mass = computed(() => (this.report() ? showMass(this.report()!.mass) : null));
   protected readonly volume = computed(() => (this.report() ? showVolume(this.report()!.volume) : null));
   protected readonly centre = computed(() => this.report()?.centerOfMass.map((c) => showLength(c).value) ?? []);
