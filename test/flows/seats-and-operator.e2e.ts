@@ -21,9 +21,10 @@ async function expectAccessible(page: Page, screen: string): Promise<void> {
   expect({ screen, violations: await accessibilityViolations(page) }).toEqual({ screen, violations: [] });
 }
 
-/** Waits for the answer of one API call. */
-function answerOf(page: Page, method: string, pathEnd: string): Promise<Response> {
-  return page.waitForResponse((r) => r.request().method() === method && new URL(r.url()).pathname.endsWith(pathEnd));
+/** Waits for the answer of one API call whose path ends with `pathEnd` (or matches it). */
+function answerOf(page: Page, method: string, pathEnd: string | RegExp): Promise<Response> {
+  const matches = (path: string) => (typeof pathEnd === 'string' ? path.endsWith(pathEnd) : pathEnd.test(path));
+  return page.waitForResponse((r) => r.request().method() === method && matches(new URL(r.url()).pathname));
 }
 
 async function fillCard(page: Page, scope: string, number: string): Promise<void> {
@@ -200,3 +201,83 @@ it('buys seats, meets the seat limit, adds a seat; an operator suspends and rest
   await byTestId(page, 'audit-row').filter({ hasText: 'Seats bought' }).first().waitFor();
   await expectAccessible(page, 'seats-13-audit-billing');
 }, 300_000); // 13 screens, each checked with axe
+
+it('keeps the owner’s settings and materials, and shows an admin the subscription read-only', async () => {
+  const page = ownerBrowser.page;
+
+  // Settings: a tolerance out of range is refused in the form; a valid change is saved and read back.
+  await page.goto(`${baseUrl()}/admin/settings`);
+  await byTestId(page, 'settings-form').waitFor();
+  await expect(byTestId(page, 'settings-density').inputValue()).resolves.toBe('5');
+  await byTestId(page, 'settings-size').fill('25');
+  await byTestId(page, 'settings-save').click();
+  await expect(byTestId(page, 'settings-size-error').innerText()).resolves.toBe('Size tolerance must be from 0 to 10 mm.');
+  await byTestId(page, 'settings-size').fill('0.3');
+  await byTestId(page, 'settings-density').fill('8');
+  await byTestId(page, 'settings-length').click();
+  await page.getByRole('option', { name: 'cm', exact: true }).click();
+  const saved = answerOf(page, 'PATCH', '/settings');
+  await byTestId(page, 'settings-save').click();
+  const body = (await saved).request().postDataJSON();
+  expect(body.defaultTolerances).toEqual({ density: 0.08, size: 0.0003 });
+  expect(body.displayUnits.length).toBe('cm');
+  await byTestId(page, 'settings-notice').waitFor();
+  await expectAccessible(page, 'seats-14-settings');
+
+  // Materials: library rows are read-only; a workspace material is added, changed and deleted.
+  await page.goto(`${baseUrl()}/admin/materials`);
+  await byTestId(page, 'materials-table').waitFor();
+  const library = byTestId(page, 'material-row').and(page.locator('[data-scope="library"]'));
+  expect(await library.count()).toBeGreaterThan(0);
+  expect(await library.first().locator('[data-testid="material-edit"]').count()).toBe(0);
+  await byTestId(page, 'material-add').click();
+  await byTestId(page, 'material-name').fill('Skipjack blend foam');
+  await byTestId(page, 'material-family').click();
+  await page.getByRole('option', { name: 'foam', exact: true }).click();
+  await byTestId(page, 'material-density').fill('140');
+  await byTestId(page, 'material-tolerance').fill('80');
+  await byTestId(page, 'material-source').fill('Our own pycnometer measurements');
+  await byTestId(page, 'material-save').click();
+  await expect(byTestId(page, 'material-tolerance-error').innerText()).resolves.toBe('Density tolerance must be from 0 to 50 %.');
+  await byTestId(page, 'material-tolerance').fill('6');
+  await expectAccessible(page, 'seats-15-material-dialog');
+  const created = answerOf(page, 'POST', '/materials');
+  await byTestId(page, 'material-save').click();
+  expect((await created).status()).toBe(201);
+  const ours = byTestId(page, 'material-row').filter({ hasText: 'Skipjack blend foam' });
+  await ours.waitFor();
+  await expect(ours.innerText()).resolves.toMatch(/140[\s\S]*±6 %[\s\S]*Workspace/);
+  await expectAccessible(page, 'seats-16-materials');
+
+  await byTestId(page, 'materials-scope-filter').click();
+  await page.getByRole('option', { name: 'This workspace only' }).click();
+  await library.first().waitFor({ state: 'detached' });
+  await page.locator('mat-option').first().waitFor({ state: 'detached' });
+
+  await ours.locator('[data-testid="material-edit"]').click();
+  await byTestId(page, 'material-density').fill('155');
+  const updated = answerOf(page, 'PATCH', /\/materials\/[0-9a-f-]+$/);
+  await byTestId(page, 'material-save').click();
+  expect((await updated).status()).toBe(200);
+  await ours.filter({ hasText: '155' }).waitFor();
+  await ours.locator('[data-testid="material-delete"]').click();
+  const removed = answerOf(page, 'DELETE', /\/materials\/[0-9a-f-]+$/);
+  await byTestId(page, 'confirm-accept').click();
+  expect((await removed).status()).toBe(204);
+  await ours.waitFor({ state: 'detached' });
+
+  // An admin of the demo workspace reads the subscription but changes nothing.
+  const admin = operatorBrowser.page;
+  await byTestId(admin, 'user-menu').click();
+  await byTestId(admin, 'sign-out').click();
+  await byTestId(admin, 'signin-email').waitFor();
+  await admin.goto(`${baseUrl()}/signin?returnTo=${encodeURIComponent('/admin/subscription')}`);
+  await byTestId(admin, 'signin-email').fill('admin@kestrelbay.test');
+  await byTestId(admin, 'signin-password').fill(operator.password);
+  await byTestId(admin, 'signin-submit').click();
+  await byTestId(admin, 'billing-read-only-note').waitFor();
+  expect(await byTestId(admin, 'card-form').count()).toBe(0);
+  expect(await byTestId(admin, 'seats-input').count()).toBe(0);
+  expect(await byTestId(admin, 'nav-operator').count()).toBe(0);
+  await expectAccessible(admin, 'seats-17-subscription-read-only');
+}, 300_000);

@@ -38,7 +38,7 @@ export class App {
     if (can(role, 'settings.manage')) links.push({ label: 'Settings', path: '/settings', icon: 'tune', testId: 'nav-settings' });
     if (can(role, 'audit.read')) links.push({ label: 'Audit trail', path: '/audit', icon: 'history', testId: 'nav-audit' });
     // Only operators ever see the platform pages in the navigation.
-    if (this.auth.user()?.isOperator) links.push({ label: 'Platform', path: '/operator/workspaces', icon: 'dns', testId: 'nav-operator' });
+    if (this.auth.user()?.isOperator) links.push({ label: 'Platform', path: '/operator', icon: 'dns', testId: 'nav-operator' });
     return links;
   });
   protected readonly crossLinks: readonly ShellLink[] = [

@@ -25,6 +25,7 @@ import type { OperatorWorkspace } from '@tumblewise/shared';
 import { EmptyState, ErrorBanner, LoadingState, PageHeader } from '@tumblewise/ui';
 import { debounceTime, distinctUntilChanged, map } from 'rxjs';
 import { WORKSPACE_STATE_LABELS, workspaceStateLabel } from '../../core/workspace-state-labels';
+import { SUBSCRIPTION_STATUS_LABELS } from '../subscription/subscription-labels';
 import { OperatorTabs } from './operator-tabs';
 import { toOperatorQuery, type OperatorFilter, type OperatorSort } from './operator-query';
 import { SuspensionDialog, type SuspensionDialogData } from './suspension-dialog';
@@ -93,6 +94,11 @@ export class OperatorWorkspaces {
   });
   protected readonly hasFilter = computed(() => !!this.filterValue().q.trim() || !!this.filterValue().state);
   protected readonly notice = signal<string | null>(null);
+
+  /** A subscription status as written on screen. */
+  protected subscriptionLabel(status: string): string {
+    return (SUBSCRIPTION_STATUS_LABELS as Record<string, string>)[status] ?? status;
+  }
 
   /** The sort header changed: ask the server again. */
   protected sortWorkspaces(sort: Sort): void {
