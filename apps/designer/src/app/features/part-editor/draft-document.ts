@@ -35,3 +35,8 @@ export function toDraftDocument(value: unknown, fallbackName?: string): DraftDoc
   if (doc.name === undefined && fallbackName) doc.name = fallbackName;
   return doc;
 }
+
+/** A deep copy of plain JSON data (documents and primitives hold nothing else). */
+export function cloneJson<T>(value: T): T {
+  return JSON.parse(JSON.stringify(value)) as T;
+}

@@ -1,5 +1,5 @@
 import type { PrimitiveShape } from '@tumblewise/shared';
-import type { DraftPrimitive } from './draft-document';
+import { cloneJson, type DraftPrimitive } from './draft-document';
 
 /** Density a new primitive starts with (kg/m³), about that of a light hardwood; the designer sets the real one. */
 export const STARTING_DENSITY = 700;
@@ -31,5 +31,5 @@ export function newPrimitive(shape: PrimitiveShape, takenIds: Iterable<string>):
   const id = freshId(shape, takenIds);
   const placement = { position: [0, 0, 0], rotationDeg: [0, 0, 0] };
   if (shape === 'point') return { id, shape, ...placement, mass: 0.01, mode: 'add' };
-  return { id, shape, ...structuredClone(STARTING_DIMENSIONS[shape]), ...placement, density: STARTING_DENSITY, mode: 'add' };
+  return { id, shape, ...cloneJson(STARTING_DIMENSIONS[shape]), ...placement, density: STARTING_DENSITY, mode: 'add' };
 }

@@ -1,6 +1,6 @@
 import { computed, Injectable, signal } from '@angular/core';
 import type { PrimitiveShape } from '@tumblewise/shared';
-import { toDraftDocument, type DraftDocument, type DraftPrimitive } from './draft-document';
+import { cloneJson, toDraftDocument, type DraftDocument, type DraftPrimitive } from './draft-document';
 import { EditHistory } from './edit-history';
 import { freshId, newPrimitive } from './new-primitive';
 import { applySettings } from './part-settings-model';
@@ -63,7 +63,7 @@ export class PartEditorState {
     const doc = this.document();
     const source = doc.primitives[index];
     if (!source) return;
-    const copy = { ...structuredClone(source), id: freshId(`${source.id}-copy`, doc.primitives.map((p) => p.id)) };
+    const copy = { ...cloneJson(source), id: freshId(`${source.id}-copy`, doc.primitives.map((p) => p.id)) };
     const primitives = [...doc.primitives];
     primitives.splice(index + 1, 0, copy);
     this.structural({ ...doc, primitives }, index + 1);

@@ -6,7 +6,7 @@ import { MatTooltip } from '@angular/material/tooltip';
 import { RouterLink } from '@angular/router';
 import { AnalysisApi, MaterialsApi, PartsApi, ProjectsApi, toApiError, VariantsApi, WorkspaceContext, type ApiError } from '@tumblewise/api-client';
 import type { SpinReport } from '@tumblewise/engine';
-import type { Material, Part, PartDocument, PrimitiveShape, Variant } from '@tumblewise/shared';
+import type { Material, Part, PartDocument, PrimitiveShape, Variant, VariantStatus } from '@tumblewise/shared';
 import { EmptyState, ErrorBanner, LoadingState, PageHeader } from '@tumblewise/ui';
 import { defer, filter, map, Subject } from 'rxjs';
 import { SpinReportPanel } from '../spin-report/spin-report-panel';
@@ -284,6 +284,12 @@ export class PartEditor {
   /** Shows a variant read-only in the report panel, or the live report again. */
   protected openVariant(variant: Variant | null): void {
     this.openedVariant.set(variant);
+  }
+
+  /** Shows a variant's new sign-off status in the history and the open report. */
+  protected updateVariantStatus(variantId: string, status: VariantStatus): void {
+    this.variants.update((list) => list?.map((v) => (v.id === variantId ? { ...v, status } : v)));
+    this.openedVariant.update((v) => (v && v.id === variantId ? { ...v, status } : v));
   }
 
   /** Replaces the working document with a variant's (undo brings the previous one back). */

@@ -1,40 +1,39 @@
-import { ChangeDetectionStrategy, Component, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, input, output } from '@angular/core';
+import type { VariantStatus } from '@tumblewise/shared';
+import { SignOffPanel } from '../sign-off/sign-off-panel';
 
 /**
- * SLOT FOR THE SIGN-OFF PANEL of a variant (features/sign-off, input `variantId`). Until that
- * component is in the tree this shows a placeholder naming the variant; when it is, the template
- * becomes `@defer (on viewport) { <tw-sign-off [variantId]="variantId()" /> }` with this
- * placeholder as its @placeholder.
+ * The sign-off of the variant open in the report panel (`SignOffPanel` of features/sign-off),
+ * loaded when it scrolls into view.
  */
 @Component({
   selector: 'tw-sign-off-slot',
   changeDetection: ChangeDetectionStrategy.OnPush,
+  imports: [SignOffPanel],
   template: `
-    <section class="tw-sign-off-slot" aria-label="Sign-off" data-testid="sign-off-slot" [attr.data-variant-id]="variantId()">
+    <section class="tw-sign-off-slot" [attr.aria-label]="'Sign-off of variant ' + (variantNumber() ?? '')" data-testid="sign-off-slot" [attr.data-variant-id]="variantId()">
       @defer (on viewport) {
-        <p><span class="material-icons" aria-hidden="true">rate_review</span> Sign-off of variant {{ variantNumber() }}: request a review, comments and the decision appear here.</p>
+        <tw-sign-off-panel [variantId]="variantId()" (statusChanged)="statusChanged.emit($event)" />
       } @placeholder {
-        <p>Sign-off</p>
+        <p>Sign-off of variant {{ variantNumber() }}</p>
+      } @loading {
+        <p>Loading the sign-off…</p>
       }
     </section>
   `,
   styles: `
     .tw-sign-off-slot {
-      border: 1px dashed var(--mat-sys-outline-variant);
+      border: 1px solid var(--mat-sys-outline-variant);
       border-radius: 12px;
-      padding: 4px 16px;
-      color: var(--mat-sys-on-surface-variant);
-    }
-    p {
-      display: flex;
-      gap: 8px;
-      align-items: center;
+      padding: 4px 16px 12px;
     }
   `,
 })
 export class SignOffSlot {
   /** The variant whose sign-off is shown. */
   readonly variantId = input.required<string>();
-  /** Its number, for the placeholder. */
+  /** Its number, for the label. */
   readonly variantNumber = input<number | null>(null);
+  /** Emitted with the variant's new status after a request or a decision. */
+  readonly statusChanged = output<VariantStatus>();
 }

@@ -55,7 +55,7 @@ function changedFields(a: unknown, b: unknown): FieldChange[] {
 
 type Loose = Record<string, unknown>;
 const asObject = (v: unknown): Loose => (v && typeof v === 'object' && !Array.isArray(v) ? (v as Loose) : {});
-const withDefaults = (v: Loose, defaults: Loose) => ({ ...structuredClone(defaults), ...v });
+const withDefaults = (v: Loose, defaults: Loose): Loose => ({ ...(JSON.parse(JSON.stringify(defaults)) as Loose), ...v });
 
 /**
  * The differences between two part documents: primitives added, removed, changed (which fields) or
