@@ -1,11 +1,11 @@
-import { ChangeDetectionStrategy, Component } from '@angular/core';
+import { ChangeDetectionStrategy, Component, input } from '@angular/core';
 
 /** The product's standing cautions: figures are estimates, conformance is for governing bodies, test safely. */
 @Component({
   selector: 'tw-cautions',
   changeDetection: ChangeDetectionStrategy.OnPush,
   template: `
-    <aside class="tw-cautions" aria-label="Cautions" data-testid="cautions">
+    <aside class="tw-cautions" [attr.aria-label]="label()" data-testid="cautions">
       <p>
         <strong>Estimates only.</strong> Figures come from idealised geometry and nominal densities. They do not
         certify that a design conforms to any governing body's rules; only that body's own test decides.
@@ -33,4 +33,7 @@ import { ChangeDetectionStrategy, Component } from '@angular/core';
     }
   `,
 })
-export class Cautions {}
+export class Cautions {
+  /** Name of the landmark; give another one where a screen shows the cautions twice ("Cautions for the tumble preview"). */
+  readonly label = input('Cautions');
+}

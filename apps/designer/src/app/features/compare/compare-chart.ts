@@ -19,13 +19,13 @@ export function chartableRows(c: Comparison): { key: string; label: string }[] {
  * figure in its display unit, with the baseline's value drawn as a dashed line.
  */
 export function compareChartOptions(c: Comparison, figure: ChartFigure): EChartsCoreOption {
-  const labels = c.variants.map((v, i) => (i === c.baselineIndex ? `${v.label} (baseline)` : v.label));
+  const labels = c.variants.map((v, i) => (i === c.baselineIndex ? `${v.label}\n(baseline)` : v.label));
   const base = {
     animation: false,
     textStyle: CHART_TEXT,
     grid: { left: 72, right: 24, top: 40, bottom: 56, containLabel: false },
     tooltip: { trigger: 'axis', axisPointer: { type: 'shadow' } },
-    xAxis: { type: 'category', data: labels, axisLabel: { ...CHART_TEXT, interval: 0, width: 120, overflow: 'break' } },
+    xAxis: { type: 'category', data: labels, axisLabel: { ...CHART_TEXT, interval: 0, lineHeight: 16 } },
   };
   if (figure === 'moments') {
     const rows = MOMENT_KEYS.map((k) => c.rows.find((r) => r.key === k)!);

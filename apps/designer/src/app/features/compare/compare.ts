@@ -8,7 +8,7 @@ import { MatOption, MatSelect } from '@angular/material/select';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
 import { API_BASE_URL, FileDownloads, PartsApi, toApiError, VariantsApi, WorkspaceContext } from '@tumblewise/api-client';
 import { buildComparison, type Comparison, type Variant } from '@tumblewise/shared';
-import { Cautions, EmptyState, ErrorBanner, LoadingState, PageHeader, StatusChip } from '@tumblewise/ui';
+import { EmptyState, ErrorBanner, LoadingState, PageHeader, StatusChip } from '@tumblewise/ui';
 import { provideCharts } from '@tumblewise/viewer';
 import { NgxEchartsDirective } from 'ngx-echarts';
 import { chartableRows, compareChartOptions, type ChartFigure } from './compare-chart';
@@ -47,7 +47,6 @@ export function variantLabel(v: Pick<Variant, 'number' | 'label'>): string {
     EmptyState,
     ErrorBanner,
     LoadingState,
-    Cautions,
   ],
   providers: [provideCharts()],
   templateUrl: './compare.html',

@@ -10,7 +10,7 @@ import { RouterLink } from '@angular/router';
 import { MaterialsApi, PartsApi, ScatterApi, toApiError, VariantsApi, WorkspaceContext } from '@tumblewise/api-client';
 import type { ScatterResult, Sensitivity } from '@tumblewise/engine';
 import type { PartDocument, ScatterStudy as Study, Variant } from '@tumblewise/shared';
-import { applyServerError, Cautions, EmptyState, ErrorBanner, FieldErrorPipe, focusFirstInvalid, LoadingState, PageHeader, VerdictChip } from '@tumblewise/ui';
+import { applyServerError, EmptyState, ErrorBanner, FieldErrorPipe, focusFirstInvalid, LoadingState, PageHeader, VerdictChip } from '@tumblewise/ui';
 import { provideCharts, SERIES_COLOURS, VIEWER_COLOURS } from '@tumblewise/viewer';
 import { NgxEchartsDirective } from 'ngx-echarts';
 import { defer, repeat, takeWhile, type Subscription } from 'rxjs';
@@ -70,7 +70,6 @@ type ToleranceGroup = FormGroup<{ densityPercent: FormControl<number | null>; si
     ErrorBanner,
     LoadingState,
     FieldErrorPipe,
-    Cautions,
   ],
   providers: [provideCharts()],
   templateUrl: './scatter-study.html',
