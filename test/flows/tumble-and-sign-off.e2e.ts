@@ -6,7 +6,8 @@ import { mailsTo, waitForMail } from '../../server/src/test-support/mail-inbox';
 /**
  * The design loop on screen: a designer's part with two saved variants (made through the API so the
  * flow does not depend on the editor's forms), the tumble preview played in the 3-D view (its canvas
- * must change between frames), the two variants compared, a spin report downloaded as PDF, a review
+ * must change between frames), the two variants compared, a spin report downloaded as PDF, a short
+ * scatter study run, a review
  * asked for; then the demo reviewer opens the link from the e-mail in a second browser and approves.
  * Every screen is screenshotted and checked with axe.
  */
@@ -148,6 +149,19 @@ it('plays the tumble preview, compares two variants, downloads a PDF, and gets a
   const [csv] = await Promise.all([page.waitForEvent('download'), byTestId(page, 'compare-csv').click()]);
   expect(readFileSync((await csv.path())!, 'utf8')).toContain('figure,unit,');
 
+  // A short scatter study of the flip-prone variant.
+  await page.goto(`${partPath}/scatter?variant=${v1.id}`);
+  await byTestId(page, 'scatter-density-grip').waitFor();
+  await byTestId(page, 'scatter-size-hoop').fill('0.2');
+  await byTestId(page, 'scatter-samples').fill('300');
+  await byTestId(page, 'scatter-seed').fill('11');
+  await byTestId(page, 'scatter-start').click();
+  await byTestId(page, 'scatter-result').waitFor({ timeout: 60000 });
+  await byTestId(page, 'scatter-histogram-marginMajor').locator('svg').first().waitFor();
+  expect(await byTestId(page, 'scatter-state').getAttribute('data-state')).toBe('done');
+  expect(await byTestId(page, 'scatter-ranking-row').count()).toBeGreaterThan(0);
+  await expectAccessible(page, '13-scatter-study-done');
+
   // Ask the demo reviewer for a review from the part editor's review panel.
   const mailsBefore = (await mailsTo(REVIEWER)).length;
   await page.goto(`${partPath}?variant=${v1.id}&panel=review`);
@@ -158,7 +172,7 @@ it('plays the tumble preview, compares two variants, downloads a PDF, and gets a
   await byTestId(page, 'review-message').fill('The face spin flips, as expected; please confirm before we cut the normal-spin version.');
   await byTestId(page, 'review-request-submit').click();
   await panel.locator('[data-testid="status-chip"][data-status="in_review"]').waitFor();
-  await expectAccessible(page, '13-review-requested');
+  await expectAccessible(page, '14-review-requested');
 
   // The reviewer follows the e-mail's link in a second browser and approves.
   const mail = await waitForMail(REVIEWER, { count: mailsBefore + 1 });
@@ -172,12 +186,12 @@ it('plays the tumble preview, compares two variants, downloads a PDF, and gets a
   await reviewPanel.scrollIntoViewIfNeeded();
   await byTestId(other, 'review-approve').waitFor();
   expect(await byTestId(other, 'review-request-form').count()).toBe(0);
-  await expectAccessible(other, '14-reviewer-before-decision');
+  await expectAccessible(other, '15-reviewer-before-decision');
   await byTestId(other, 'review-decision-body').fill('Confirmed from the polhode: the face spin turns over.');
   await byTestId(other, 'review-approve').click();
   await reviewPanel.locator('[data-testid="status-chip"][data-status="approved"]').waitFor();
   await expect(reviewPanel.locator('[data-testid="review-entry"][data-kind="approved"]').innerText()).resolves.toContain('Confirmed from the polhode');
-  await expectAccessible(other, '15-reviewer-approved');
+  await expectAccessible(other, '16-reviewer-approved');
 
   const thread = await api<{ status: string }>(`/workspaces/${ws}/variants/${v1.id}/review`, token);
   expect(thread.status).toBe('approved');
