@@ -83,7 +83,7 @@ export async function startPaymentFake(port: number, options: PaymentFakeOptions
       const trialDays = Number(f.get('trial_period_days') ?? 0);
       const s: FakeSubscription = {
         id: out.body.id, customer: out.body.customer, itemId: out.body.items.data[0].id, quantity: out.body.items.data[0].quantity, unitAmount: plan.amount ?? 0,
-        currency: plan.currency ?? 'eur', cancelAtPeriodEnd: false, status: trialDays > 0 ? 'trialing' : 'active', periodEnd: now() + 30 * 86400,
+        currency: plan.currency ?? 'eur', cancelAtPeriodEnd: false, status: trialDays > 0 ? 'trialing' : 'active', periodEnd: now() + (trialDays > 0 ? trialDays : 30) * 86400,
       };
       subscriptions.set(s.id, s);
       const body = { ...out.body, ...subscriptionObject(s), trial_end: trialDays > 0 ? now() + trialDays * 86400 : null };

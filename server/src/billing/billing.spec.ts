@@ -155,7 +155,7 @@ describe('suspension by an operator', () => {
     const s = await request(t.app).post(`/api/v1/operator/workspaces/${workspace.id}/suspend`).set(bearer(operator.accessToken)).send({ reason: 'Reported abuse under review' }).expect(200);
     expect(s.body).toMatchObject({ state: 'suspended', suspendedReason: 'Reported abuse under review' });
     const signin = await request(t.app).post('/api/v1/auth/signin').send({ email: owner.user.email, password: owner.password }).expect(200);
-    expect(signin.body.memberships[0].workspace.state).toBe('suspended');
+    expect(signin.body.memberships[0].workspace).toMatchObject({ state: 'suspended', suspendedReason: 'Reported abuse under review' });
     await request(t.app).get(`${base}/members`).set(bearer(signin.body.accessToken)).expect(200);
     const write = await request(t.app).post(`${base}/projects`).set(bearer(signin.body.accessToken)).send({ name: 'No', category: 'bat' }).expect(403);
     expect(write.body.error).toMatchObject({ code: 'workspace_suspended', message: expect.stringContaining('Reported abuse under review') });
@@ -164,7 +164,7 @@ describe('suspension by an operator', () => {
     const actions = (await AuditEvent.findAll({ where: { workspaceId: workspace.id } })).map((e) => e.action);
     expect(actions).toEqual(expect.arrayContaining(['workspace.suspended', 'workspace.restored']));
     const list = await request(t.app).get('/api/v1/operator/workspaces').query({ q: workspace.name, sort: 'name' }).set(bearer(operator.accessToken)).expect(200);
-    expect(list.body[0]).toMatchObject({ id: workspace.id, plan: 'bench-monthly', seats: 3, members: 1, state: 'active' });
+    expect(list.body[0]).toMatchObject({ id: workspace.id, plan: 'Bench', seats: 3, members: 1, state: 'active' });
     await request(t.app).get('/api/v1/operator/workspaces').set(bearer(owner.accessToken)).expect(403);
   });
 });

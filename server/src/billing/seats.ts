@@ -23,6 +23,7 @@ export async function assertSeatsFor(workspace: Workspace, evaluationSeats: numb
   const held = usage.members + usage.pendingInvitations - (options.acceptingPending ? 1 : 0);
   if (held + adding > usage.bought) {
     const what = usage.evaluationAllowance ? `the ${usage.bought} seats of the evaluation allowance` : `its ${usage.bought} seats`;
-    throw AppError.conflict('seat_limit', `This workspace has used ${what} (${usage.members} members, ${usage.pendingInvitations} pending invitations). An owner can buy more seats under Subscription in the admin app, or revoke a pending invitation.`);
+    const count = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
+    throw AppError.conflict('seat_limit', `This workspace has used ${what} (${count(usage.members, 'member', 'members')}, ${count(usage.pendingInvitations, 'pending invitation', 'pending invitations')}). An owner can buy more seats under Subscription in the admin app, or revoke a pending invitation.`);
   }
 }

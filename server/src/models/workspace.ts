@@ -72,6 +72,9 @@ export class Workspace extends Model<InferAttributes<Workspace>, InferCreationAt
   }
 
   toDto(): WorkspaceDto {
-    return { id: this.id, name: this.name, state: this.effectiveState(), createdAt: this.createdAt.toISOString() };
+    return {
+      id: this.id, name: this.name, state: this.effectiveState(), readOnlyFrom: this.readOnlyFrom()?.toISOString() ?? null,
+      suspendedReason: this.state === 'suspended' ? this.suspendedReason ?? null : null, createdAt: this.createdAt.toISOString(),
+    };
   }
 }

@@ -7,6 +7,7 @@ import { recordAudit } from '../audit/audit-log';
 import { AppError } from '../http/app-error';
 import { routeGroup } from '../http/api-route';
 import { Workspace } from '../models/init-models';
+import { planCatalogue } from '../billing/plan-catalogue';
 
 type Row = { id: string; members: string; last_activity: Date | null };
 
@@ -25,7 +26,7 @@ export function operatorRoutes(ctx: AppContext): Router {
     );
     const byId = new Map(rows.map((r) => [r.id, r]));
     return workspaces.map((w) => ({
-      id: w.id, name: w.name, createdAt: w.createdAt.toISOString(), plan: w.planId ?? null,
+      id: w.id, name: w.name, createdAt: w.createdAt.toISOString(), plan: planCatalogue(ctx.config.billing).find((p) => p.id === w.planId)?.name ?? w.planId ?? null,
       seats: w.subscriptionId ? w.seats ?? 0 : ctx.config.billing.evaluationSeats, members: Number(byId.get(w.id)?.members ?? 0),
       state: w.effectiveState(), subscriptionStatus: w.subscriptionStatus ?? null,
       lastActivityAt: byId.get(w.id)?.last_activity ? new Date(byId.get(w.id)!.last_activity!).toISOString() : null, suspendedReason: w.suspendedReason ?? null,

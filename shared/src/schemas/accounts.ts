@@ -35,6 +35,10 @@ export const workspaceSchema = z.object({
   id: idSchema,
   name: z.string(),
   state: z.enum(['active', 'past_due', 'read_only', 'suspended']),
+  /** When a past-due workspace turns read-only (null otherwise). */
+  readOnlyFrom: timestampSchema.nullable().optional(),
+  /** Why the platform suspended it (null otherwise). */
+  suspendedReason: z.string().nullable().optional(),
   createdAt: timestampSchema,
 });
 export type Workspace = z.infer<typeof workspaceSchema>;
