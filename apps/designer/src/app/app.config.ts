@@ -7,7 +7,7 @@ import {
   provideZonelessChangeDetection,
 } from '@angular/core';
 import { provideRouter, withComponentInputBinding } from '@angular/router';
-import { AuthApi, authInterceptor, errorInterceptor } from '@tumblewise/api-client';
+import { AuthApi, authInterceptor, errorInterceptor, workspaceStateInterceptor } from '@tumblewise/api-client';
 import { provideLabelledOverlayContainer } from '@tumblewise/ui';
 import { routes } from './app.routes';
 
@@ -17,7 +17,7 @@ export const appConfig: ApplicationConfig = {
     provideBrowserGlobalErrorListeners(),
     provideZonelessChangeDetection(),
     provideRouter(routes, withComponentInputBinding()),
-    provideHttpClient(withFetch(), withInterceptors([authInterceptor, errorInterceptor])),
+    provideHttpClient(withFetch(), withInterceptors([authInterceptor, errorInterceptor, workspaceStateInterceptor])),
     // Restore the session from the refresh cookie before the first route is resolved.
     provideAppInitializer(() => inject(AuthApi).restoreSession()),
     provideLabelledOverlayContainer(),
