@@ -46,11 +46,17 @@ export async function startPaymentFake(port: number, options: PaymentFakeOptions
     id: s.id, object: 'subscription', customer: s.customer, status: s.status, cancel_at_period_end: s.cancelAtPeriodEnd, current_period_end: s.periodEnd,
     items: { object: 'list', data: [{ id: s.itemId, object: 'subscription_item', quantity: s.quantity }] }, metadata: {},
   });
-  const deliver = async (type: string, object: object) => {
-    if (!webhook) return;
-    const payload = JSON.stringify({ id: id('evt'), object: 'event', type, created: now(), data: { object }, livemode: false, api_version: '2024-06-20' });
-    const header = signer.webhooks.generateTestHeaderString({ payload, secret: webhook.secret });
-    await fetch(webhook.url, { method: 'POST', headers: { 'content-type': 'application/json', 'stripe-signature': header }, body: payload }).catch(() => undefined);
+  // Events are stamped when the change happens and delivered one at a time, in that order.
+  let deliveries = Promise.resolve();
+  const deliver = (type: string, object: object): Promise<void> => {
+    if (!webhook) return deliveries;
+    const target = webhook;
+    const payload = JSON.stringify({ id: id('evt'), object: 'event', type, created: now(), data: { object: structuredClone(object) }, livemode: false, api_version: '2024-06-20' });
+    deliveries = deliveries.then(async () => {
+      const header = signer.webhooks.generateTestHeaderString({ payload, secret: target.secret });
+      await fetch(target.url, { method: 'POST', headers: { 'content-type': 'application/json', 'stripe-signature': header }, body: payload }).catch(() => undefined);
+    });
+    return deliveries;
   };
   const invoiceFor = (s: FakeSubscription, amount: number, status: FakeInvoice['status'], description: string): FakeInvoice => {
     const invId = id('in');
@@ -89,7 +95,8 @@ export async function startPaymentFake(port: number, options: PaymentFakeOptions
       const body = { ...out.body, ...subscriptionObject(s), trial_end: trialDays > 0 ? now() + trialDays * 86400 : null };
       res.json(body);
       const first = invoiceFor(s, trialDays > 0 ? 0 : s.quantity * s.unitAmount, 'paid', trialDays > 0 ? `Trial of ${trialDays} days, ${s.quantity} seats` : `${s.quantity} seats`);
-      void deliver('customer.subscription.created', subscriptionObject(s)).then(() => deliver('invoice.paid', first));
+      void deliver('customer.subscription.created', subscriptionObject(s));
+      void deliver('invoice.paid', first);
       return;
     }
     res.status(out.status).json(out.body);
@@ -144,7 +151,8 @@ export async function startPaymentFake(port: number, options: PaymentFakeOptions
     const inv = invoiceFor(s, s.quantity * s.unitAmount, failed ? 'open' : 'paid', `${s.quantity} seats, monthly`);
     if (failed) s.status = 'past_due';
     res.json(inv);
-    void deliver(failed ? 'invoice.payment_failed' : 'invoice.paid', inv).then(() => deliver('customer.subscription.updated', subscriptionObject(s)));
+    void deliver(failed ? 'invoice.payment_failed' : 'invoice.paid', inv);
+    void deliver('customer.subscription.updated', subscriptionObject(s));
   });
 
   app.use(layer);

@@ -25,7 +25,7 @@ afterAll(async () => {
 });
 
 async function until(check: () => Promise<boolean>) {
-  for (let i = 0; i < 100; i++) { if (await check()) return; await new Promise((r) => setTimeout(r, 50)); }
+  for (let i = 0; i < 400; i++) { if (await check()) return; await new Promise((r) => setTimeout(r, 50)); }
   throw new Error('the event did not arrive');
 }
 
@@ -34,6 +34,8 @@ it('turns past due on a failed renewal and back on a paid one', async () => {
   const base = `/api/v1/workspaces/${owner.workspace.id}`;
   await request(t.app).post(`${base}/billing/subscription`).set(bearer(owner.accessToken)).send({ seats: 2, cardToken: 'tok_visa' }).expect(200);
   const w = (await Workspace.findByPk(owner.workspace.id))!;
+  // The subscription's own events (created, the trial invoice paid) arrive first.
+  await until(async () => (await Workspace.findByPk(w.id))!.billingEventAt !== null);
   const renew = (outcome: string) => fetch(`${process.env.PAYMENT_API_URL}/v1/test_helpers/subscriptions/${w.subscriptionId}/renew`, {
     method: 'POST', headers: { authorization: 'Bearer sk_test_events', 'content-type': 'application/x-www-form-urlencoded' }, body: new URLSearchParams({ outcome }),
   });
