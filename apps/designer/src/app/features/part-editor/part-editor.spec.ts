@@ -200,4 +200,27 @@ describe('PartEditor', () => {
     answerAnalysis();
     backend.expectNone((r) => r.method === 'PATCH');
   });
+
+  it('saves a variant and shows a server refusal at its field, keeping the draft', async () => {
+    await open();
+    await settle(ANALYSIS_DEBOUNCE_MS);
+    answerAnalysis();
+    (host.querySelector('[data-testid="save-variant"]') as HTMLElement).click();
+    await settle();
+    const label = document.querySelector<HTMLInputElement>('[data-testid="variant-label"]')!;
+    label.value = 'Thicker shaft';
+    label.dispatchEvent(new Event('input'));
+    (document.querySelector('[data-testid="variant-save-confirm"]') as HTMLElement).click();
+    await settle();
+    const post = backend.expectOne((r) => r.method === 'POST' && r.url === `${BASE}/parts/${PART_ID}/variants`);
+    expect(post.request.body).toMatchObject({ label: 'Thicker shaft', document: { primitives: [{ id: 'shaft', radius: 0.0135 }] } });
+    post.flush(
+      { error: { code: 'unanalysable', message: 'Primitives[0].density leaves no mass after the removals.', field: 'primitives[0].density' } },
+      { status: 422, statusText: 'Unprocessable Entity' },
+    );
+    await settle();
+    expect(host.querySelector('[data-testid="error-banner"]')!.textContent).toContain('The variant was not saved.');
+    expect(host.querySelector('[data-testid="error-density"]')!.textContent).toContain('Density leaves no mass after the removals.');
+    expect(host.querySelectorAll('[data-testid="variant-row"]')).toHaveLength(0);
+  });
 });
