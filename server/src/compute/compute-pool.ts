@@ -28,6 +28,8 @@ export class ComputePool {
       const transferList = task.kind === 'scatter' && task.progress ? [task.progress] : undefined;
       outcome = await this.pool.run(task, { signal, transferList: transferList as never });
     } catch (err) {
+      // The client went away (or a study was cancelled): not a server fault, nothing to log.
+      if ((err as Error)?.name === 'AbortError') throw new AppError(499, 'cancelled', 'The request was cancelled before it finished.');
       if ((err as Error)?.message?.includes('Task queue is at limit')) {
         throw new AppError(503, 'busy', 'The server is busy with other computations. Try again in a moment.', undefined, { 'Retry-After': '5' });
       }
