@@ -31,6 +31,8 @@ function angularProject(displayName, folder) {
 }
 
 module.exports = {
+  // A loaded two-core CI machine runs some component tests for seconds; a timeout is not a speed target.
+  testTimeout: 30000,
   projects: [
     angularProject('designer', 'apps/designer'),
     angularProject('admin', 'apps/admin'),
