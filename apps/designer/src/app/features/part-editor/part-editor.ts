@@ -77,8 +77,6 @@ export class PartEditor {
   readonly projectId = input.required<string>();
   /** Route parameter `:partId`. */
   readonly partId = input.required<string>();
-  /** Query parameter `variant`: a variant to open at once (links from review e-mails land here). */
-  readonly variant = input<string | undefined>(undefined);
 
   protected readonly state = inject(PartEditorState);
   protected readonly workspace = inject(WorkspaceContext);
@@ -129,18 +127,6 @@ export class PartEditor {
   private readonly saveIssues = signal<FieldIssues>({});
   /** The variant open read-only in the report panel. */
   protected readonly openedVariant = signal<Variant | null>(null);
-  private openedFromLink = false;
-  /** Opens the variant named in the address once the list has loaded. */
-  private readonly openLinkedVariant = effect(() => {
-    const wanted = this.variant();
-    const list = this.variants.value();
-    if (!wanted || !list || this.openedFromLink) return;
-    const found = list.find((v) => v.id === wanted);
-    if (found) {
-      this.openedFromLink = true;
-      untracked(() => this.openedVariant.set(found));
-    }
-  });
 
   protected readonly analysis = signal<LiveAnalysis>(IDLE_ANALYSIS);
   protected readonly clientIssues = computed(() => documentIssues(this.state.document()));
