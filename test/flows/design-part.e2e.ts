@@ -1,6 +1,5 @@
-import AxeBuilder from '@axe-core/playwright';
 import type { Page } from 'playwright-core';
-import { baseUrl, openBrowser, screenshot } from '../support/browser';
+import { accessibilityViolations, baseUrl, openBrowser, screenshot } from '../support/browser';
 
 /**
  * The designer's main job on screen: the demo designer signs in, creates a project and a part, adds
@@ -17,15 +16,10 @@ const projectName = `Practice racket ${stamp}`;
 
 const byTestId = (page: Page, id: string) => page.locator(`[data-testid="${id}"]`);
 
-/**
- * Screenshot, then axe on the whole page except the embedded 3-D viewer (tw-part-viewer), whose
- * own tests own its accessibility; everything this flow builds is checked.
- */
+/** Screenshot, then axe on the whole page, the embedded 3-D viewer included. */
 async function expectAccessible(page: Page, screen: string): Promise<void> {
   await screenshot(page, screen);
-  const result = await new AxeBuilder({ page } as never).exclude('tw-part-viewer').analyze();
-  const violations = result.violations.map((v) => ({ id: v.id, impact: v.impact, help: v.help, nodes: v.nodes.map((n) => n.target.join(' ')).slice(0, 5) }));
-  expect({ screen, violations }).toEqual({ screen, violations: [] });
+  expect({ screen, violations: await accessibilityViolations(page) }).toEqual({ screen, violations: [] });
 }
 
 /** Types a value into a field of the selected primitive's form (or the settings form). */
