@@ -21,6 +21,7 @@ export * from './analysis/analysis-api';
 export * from './simulation/simulation-api';
 export * from './reviews/reviews-api';
 export * from './scatter/scatter-api';
+export * from './measurements/measurements-api';
 export * from './downloads/download-file';
 export * from './billing/workspace-standing';
 export * from './billing/billing-api';
