@@ -1,5 +1,6 @@
 import request from 'supertest';
-import { Mesh, Variant } from '../models/init-models';
+import { Membership, Mesh, Variant } from '../models/init-models';
+import { stlFileName } from './mesh-routes';
 import { asciiStl, binaryStl, cubeTriangles } from '../test-support/stl-fixtures';
 import { bearer, signUp, startTestApp, type TestApp } from '../test-support/test-app';
 
@@ -63,5 +64,81 @@ describe('STL uploads', () => {
     expect(v.body.report.mass).toBeCloseTo(1, 9);
     expect(v.body.report.principal.moments[0]).toBeCloseTo((1 * 0.1 ** 2) / 6, 9);
     expect(await Variant.count({ where: { partId: part.body.id } })).toBe(1);
+  });
+});
+
+/** Supertest reads a model/stl body as raw bytes. */
+const asBytes = (res: request.Response, cb: (err: Error | null, body: Buffer) => void) => {
+  const chunks: Buffer[] = [];
+  res.on('data', (c: Buffer) => chunks.push(c));
+  res.on('end', () => cb(null, Buffer.concat(chunks)));
+};
+
+describe('reading an uploaded mesh back for drawing', () => {
+  let reviewer: Awaited<ReturnType<typeof signUp>>;
+  let stranger: Awaited<ReturnType<typeof signUp>>;
+  const cube = binaryStl(cubeTriangles(40));
+  let meshId = '';
+  beforeAll(async () => {
+    meshId = (await upload(cube, 'block-40mm.stl').expect(201)).body.id;
+    reviewer = await signUp(t.app);
+    await Membership.create({ workspaceId: owner.workspace.id, userId: reviewer.user.id, role: 'reviewer' });
+    stranger = await signUp(t.app);
+  });
+
+  it('answers the stored STL bytes unchanged as model/stl, with its SHA-256 as ETag', async () => {
+    const res = await request(t.app).get(`${base}/meshes/${meshId}/geometry`).set(bearer(owner.accessToken)).buffer(true).parse(asBytes).expect(200);
+    expect(res.headers['content-type']).toMatch(/^model\/stl/);
+    expect(Buffer.compare(res.body as Buffer, cube)).toBe(0);
+    const meta = await request(t.app).get(`${base}/meshes/${meshId}`).set(bearer(owner.accessToken)).expect(200);
+    expect(res.headers['etag']).toBe(`"${meta.body.sha256}"`);
+    // A second request with the ETag is answered 304 without the body (RFC 9110 §13.1.2, If-None-Match).
+    await request(t.app).get(`${base}/meshes/${meshId}/geometry`).set(bearer(owner.accessToken)).set('If-None-Match', res.headers['etag']).expect(304);
+  });
+
+  it('answers an ASCII upload as its ASCII text', async () => {
+    const ascii = asciiStl(cubeTriangles());
+    const id = (await upload(ascii, 'ascii.stl').expect(201)).body.id;
+    const res = await request(t.app).get(`${base}/meshes/${id}/geometry`).set(bearer(owner.accessToken)).buffer(true).parse(asBytes).expect(200);
+    expect((res.body as Buffer).toString('ascii')).toBe(ascii.toString('ascii'));
+  });
+
+  it('answers the metadata without the bytes', async () => {
+    const res = await request(t.app).get(`${base}/meshes/${meshId}`).set(bearer(owner.accessToken)).expect(200);
+    expect(res.body).toMatchObject({ id: meshId, name: 'block-40mm.stl', triangleCount: 12, byteSize: cube.length, format: 'binary' });
+    expect(res.body).not.toHaveProperty('data');
+  });
+
+  it('lets a reviewer read the list, the metadata and the geometry, but not upload or delete', async () => {
+    const token = bearer(reviewer.accessToken);
+    const list = await request(t.app).get(`${base}/meshes`).set(token).expect(200);
+    expect(list.body.map((m: { id: string }) => m.id)).toContain(meshId);
+    await request(t.app).get(`${base}/meshes/${meshId}`).set(token).expect(200);
+    const geo = await request(t.app).get(`${base}/meshes/${meshId}/geometry`).set(token).buffer(true).parse(asBytes).expect(200);
+    expect((geo.body as Buffer).length).toBe(cube.length);
+    const before = await Mesh.count();
+    const up = await request(t.app).post(`${base}/meshes`).set(token).attach('file', cube, 'x.stl');
+    expect(up.status).toBe(403);
+    expect((await request(t.app).delete(`${base}/meshes/${meshId}`).set(token)).status).toBe(403);
+    expect(await Mesh.count()).toBe(before);
+  });
+
+  it('answers 404 for another workspace’s mesh, an unknown id and a malformed id', async () => {
+    const theirs = `/api/v1/workspaces/${stranger.workspace.id}`;
+    // Someone else's workspace in the path: not a member there.
+    expect((await request(t.app).get(`${base}/meshes/${meshId}/geometry`).set(bearer(stranger.accessToken))).status).toBe(404);
+    // One's own workspace in the path, another workspace's mesh id.
+    expect((await request(t.app).get(`${theirs}/meshes/${meshId}/geometry`).set(bearer(stranger.accessToken))).status).toBe(404);
+    expect((await request(t.app).get(`${theirs}/meshes/${meshId}`).set(bearer(stranger.accessToken))).status).toBe(404);
+    const unknown = await request(t.app).get(`${base}/meshes/00000000-0000-4000-8000-000000000000/geometry`).set(bearer(owner.accessToken));
+    expect(unknown.status).toBe(404);
+    expect(unknown.body.error.code).toBe('not_found');
+    expect((await request(t.app).get(`${base}/meshes/not-an-id/geometry`).set(bearer(owner.accessToken))).status).toBe(404);
+  });
+
+  it('names the download after the mesh, safe for a header', () => {
+    expect(stlFileName('block-40mm.stl')).toBe('block-40mm.stl');
+    expect(stlFileName('Wing "v2"/final')).toBe('Wing _v2_final.stl');
+    expect(stlFileName('***')).toBe('_.stl');
   });
 });

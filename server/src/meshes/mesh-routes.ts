@@ -58,6 +58,30 @@ export function meshRoutes(ctx: AppContext, router: Router): void {
   });
 
   route({
+    method: 'get', path: '/meshes/:meshId', summary: 'One uploaded mesh (without its bytes).',
+    access: { kind: 'workspace', permission: 'workspace.read' }, params,
+    success: { status: 200, description: 'The mesh with its check report.', schema: meshSchema },
+    handler: async ({ params: p }, req) => {
+      const mesh = await findInWorkspace(Mesh, p.meshId, membershipOf(req).workspaceId, 'Mesh', { attributes: { exclude: ['data'] } });
+      return mesh.toDto();
+    },
+  });
+
+  route({
+    method: 'get', path: '/meshes/:meshId/geometry',
+    summary: 'The uploaded STL file as stored (binary or ASCII, `model/stl`), for drawing; its units are the file\'s own (the part document\'s `scale` converts them).',
+    access: { kind: 'workspace', permission: 'workspace.read' }, params,
+    success: { status: 200, description: 'model/stl: the bytes that passed the upload check. ETag is the SHA-256, so a repeated request answers 304.' },
+    handler: async ({ params: p }, req, res) => {
+      const mesh = await findInWorkspace(Mesh, p.meshId, membershipOf(req).workspaceId, 'Mesh');
+      // A stored mesh never changes (a new upload is a new row): the browser may keep it.
+      res.set({ 'Cache-Control': 'private, max-age=86400', ETag: `"${mesh.sha256}"` });
+      res.attachment(stlFileName(mesh.name)).type('model/stl').send(mesh.data);
+      return undefined;
+    },
+  });
+
+  route({
     method: 'delete', path: '/meshes/:meshId', summary: 'Delete an uploaded mesh.',
     access: { kind: 'workspace', permission: 'projects.edit' }, params,
     success: { status: 204, description: 'Deleted.' },
@@ -67,4 +91,10 @@ export function meshRoutes(ctx: AppContext, router: Router): void {
       return undefined;
     },
   });
+}
+
+/** A download name for a stored mesh: its name, safe for a header, ending in .stl. */
+export function stlFileName(name: string): string {
+  const base = name.replace(/[^\w.\- ]+/g, '_').trim().slice(0, 120) || 'mesh';
+  return /\.stl$/i.test(base) ? base : `${base}.stl`;
 }
