@@ -27,6 +27,20 @@ describe('GET /health', () => {
   });
 });
 
+describe('GET /health/live', () => {
+  it('answers alive without asking the mail server or the payment fake', async () => {
+    // Both services point at ports nothing listens on: the full check says degraded, liveness does not care.
+    const t = await startTestApp({ SMTP_PORT: String(await freePort()), PAYMENT_API_URL: `http://127.0.0.1:${await freePort()}` });
+    try {
+      const res = await request(t.app).get('/api/v1/health/live').expect(200);
+      expect(res.body).toEqual({ status: 'alive' });
+      expect(res.headers['cache-control']).toBe('no-store');
+      const full = await request(t.app).get('/api/v1/health').expect(200);
+      expect(full.body.status).toBe('degraded');
+    } finally { await t.close(); }
+  });
+});
+
 describe('PostgreSQL stopped and started again', () => {
   // A cluster of this test's own, so stopping it disturbs no other suite.
   const cluster = new PostgresCluster({
@@ -51,6 +65,8 @@ describe('PostgreSQL stopped and started again', () => {
       const health = await request(app).get('/api/v1/health').expect(503);
       expect(health.body).toMatchObject({ status: 'unavailable', database: 'down', error: { code: 'database_unavailable' } });
       expect(health.headers['retry-after']).toBe('5');
+      // The process itself is still alive: the liveness route does not ask the database.
+      await request(app).get('/api/v1/health/live').expect(200, { status: 'alive' });
       const signin = await request(app).post('/api/v1/auth/signin').send({ email: owner.user.email, password: owner.password }).expect(503);
       expect(signin.body.error).toEqual({ code: 'database_unavailable', message: expect.stringMatching(/database is not reachable/) });
 

@@ -21,10 +21,26 @@ async function databaseUp(ctx: AppContext): Promise<boolean> {
   }
 }
 
-/** `GET /health`: 200 while the database answers (mail or payment down: degraded), 503 otherwise. */
+export const livenessSchema = z.object({ status: z.literal('alive') });
+
+/**
+ * `GET /health/live`: the process answers HTTP; it touches no database, mail or payment service
+ * (a load balancer's liveness probe, and the baseline of the throughput benchmark).
+ * `GET /health`: 200 while the database answers (mail or payment down: degraded), 503 otherwise.
+ */
 export function healthRoutes(ctx: AppContext): Router {
   const router = Router();
-  routeGroup(router, ctx.catalogue, '')({
+  const route = routeGroup(router, ctx.catalogue, '');
+  route({
+    method: 'get', path: '/health/live', summary: 'Whether this server process answers at all; checks no other service.',
+    access: { kind: 'public' },
+    success: { status: 200, description: 'The process is alive.', schema: livenessSchema },
+    handler: (_input, _req, res) => {
+      res.setHeader('Cache-Control', 'no-store');
+      return { status: 'alive' as const };
+    },
+  });
+  route({
     method: 'get', path: '/health', summary: 'Whether the database, the mail server and the payment provider answer.',
     access: { kind: 'public' }, errors: [503],
     success: { status: 200, description: 'Service states.', schema: healthSchema },
