@@ -29,3 +29,4 @@ export * from './billing/workspace-state-interceptor';
 export * from './settings/settings-api';
 export * from './operator/operator-api';
 export * from './materials/material-library-api';
+export * from './meshes/meshes-api';
