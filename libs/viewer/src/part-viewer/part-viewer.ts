@@ -11,6 +11,7 @@ import {
   input,
   isDevMode,
   linkedSignal,
+  output,
   signal,
   untracked,
   viewChild,
@@ -31,7 +32,9 @@ import { of, switchMap, timer } from 'rxjs';
 import { provideCharts } from '../charts/provide-charts';
 import { axisRod } from '../scene/axis-rod';
 import { disposeObject } from '../scene/dispose-object';
-import { buildPartScene, type PartScene } from '../scene/part-scene';
+import { MeshGeometryCache } from '../scene/mesh-geometry';
+import { MESH_GEOMETRY_SOURCE } from '../scene/mesh-geometry-source';
+import { buildPartScene, type PartScene, type UploadedMeshStatus } from '../scene/part-scene';
 import { buildPolhodeScene, type PolhodeScene } from '../scene/polhode-scene';
 import { AXIS_LABELS, AXIS_ROLES, VIEWER_COLOURS } from '../scene/viewer-palette';
 import { ViewerStage, type ViewName } from '../scene/viewer-stage';
@@ -79,6 +82,12 @@ const READOUT_INTERVAL_MS = 100;
   providers: [provideCharts()],
   templateUrl: './part-viewer.html',
   styleUrl: './part-viewer.scss',
+  host: {
+    // How many uploaded meshes the picture holds, is waiting for, or had to leave out.
+    '[attr.data-meshes-drawn]': 'uploadedMeshStatus().drawn.length',
+    '[attr.data-meshes-pending]': 'uploadedMeshStatus().pending.length',
+    '[attr.data-meshes-failed]': 'uploadedMeshStatus().failed.length',
+  },
 })
 export class TwPartViewer {
   /** The part document to draw (SI units; placement angles in degrees). */
@@ -87,9 +96,14 @@ export class TwPartViewer {
   readonly report = input.required<SpinReport>();
   /** A simulation already at hand for the document's own misalignment; fetched when absent or when the misalignment changes. */
   readonly simulation = input<SimulationResult | null>(null);
+  /** Where the uploaded meshes of the picture stand, after each drawing (drawn, loading, failed with the reason). */
+  readonly uploadedMeshes = output<UploadedMeshStatus>();
 
   private readonly simulationApi = inject(SimulationApi);
   private readonly requestDelay = inject(TUMBLE_REQUEST_DELAY_MS);
+  /** Uploaded meshes, fetched once each through the app's source and drawn again when they arrive. */
+  private readonly meshCache = new MeshGeometryCache(inject(MESH_GEOMETRY_SOURCE, { optional: true }), () => this.redrawPart());
+  protected readonly uploadedMeshStatus = signal<UploadedMeshStatus>({ drawn: [], pending: [], failed: [] });
   private readonly partCanvas = viewChild.required<ElementRef<HTMLCanvasElement>>('partCanvas');
   private readonly polhodeCanvas = viewChild.required<ElementRef<HTMLCanvasElement>>('polhodeCanvas');
 
@@ -132,7 +146,8 @@ export class TwPartViewer {
   protected readonly summary = computed(() => tumbleSummary(this.report(), this.track(), this.misalignment()));
   protected readonly canvasLabel = computed(() => {
     const r = this.report();
-    return `3-D view of ${r.name ?? 'the part'} with its principal axes and intended spin axis. ${this.playing() ? 'The tumble preview is playing.' : 'The tumble preview is paused.'}`;
+    const failed = this.uploadedMeshStatus().failed.map((f) => ` The uploaded mesh “${f.id}” is not drawn: ${f.message}.`).join('');
+    return `3-D view of ${r.name ?? 'the part'} with its principal axes and intended spin axis.${failed} ${this.playing() ? 'The tumble preview is playing.' : 'The tumble preview is paused.'}`;
   });
 
   private partStage: ViewerStage | null = null;
@@ -288,12 +303,20 @@ export class TwPartViewer {
     if (!stage) return;
     const previousReach = this.partScene?.reach ?? null;
     if (this.partScene) disposeObject(this.partScene.body);
-    this.partScene = buildPartScene(doc, report);
+    this.partScene = buildPartScene(doc, report, (meshId, scale) => this.meshCache.lookup(meshId, scale));
     stage.scene.add(this.partScene.body);
+    this.uploadedMeshStatus.set(this.partScene.uploadedMeshes);
+    this.uploadedMeshes.emit(this.partScene.uploadedMeshes);
     const reach = this.partScene.reach;
     if (previousReach === null || Math.abs(reach - previousReach) > 0.2 * previousReach) stage.frameSphere(reach * 1.5);
     this.showMomentum(this.track());
     this.applyTime();
+  }
+
+  /** Draws the current document again (an uploaded mesh arrived or failed). */
+  private redrawPart(): void {
+    if (!this.stagesReady() || !this.partStage) return;
+    this.showPart(this.document(), this.report());
   }
 
   private showMotion(track: SimulationResult | null): void {
@@ -331,6 +354,7 @@ export class TwPartViewer {
     this.resizeObserver?.disconnect();
     this.partStage?.dispose();
     this.polhodeStage?.dispose();
+    this.meshCache.dispose();
     this.partStage = this.polhodeStage = null;
     this.partScene = this.polhodeScene = null;
     this.momentumArrow = null;

@@ -2,6 +2,7 @@ import { Box3, DoubleSide, Group, Matrix4, Mesh, MeshStandardMaterial, SphereGeo
 import type { PartDocument } from '@tumblewise/shared';
 import type { SpinReport } from '@tumblewise/engine';
 import { axisRod } from './axis-rod';
+import type { MeshGeometryState } from './mesh-geometry';
 import { placementMatrix } from './placement';
 import { primitiveGeometry } from './primitive-geometry';
 import { AXIS_ROLES, VIEWER_COLOURS } from './viewer-palette';
@@ -12,17 +13,31 @@ export interface PartScene {
   readonly body: Group;
   /** Radius of a sphere about the centre of mass that holds the whole part (m); at least 1 mm. */
   readonly reach: number;
-  /** Ids of primitives that could not be drawn (uploaded meshes). */
+  /** Ids of primitives that could not be drawn (uploaded meshes not at hand). */
   readonly notDrawn: string[];
+  /** Uploaded meshes (`meshId` primitives): drawn, still loading, or failed with the reason. */
+  readonly uploadedMeshes: UploadedMeshStatus;
 }
+
+/** Where the uploaded meshes of one drawing stand (primitive ids). */
+export interface UploadedMeshStatus {
+  drawn: string[];
+  pending: string[];
+  failed: { id: string; message: string }[];
+}
+
+/** Answers the geometry of an uploaded mesh at a scale (see MeshGeometryCache). */
+export type UploadedMeshLookup = (meshId: string, scale: number) => MeshGeometryState;
 
 /**
  * Builds the part of a part document as three.js objects in part coordinates, shifted so the
  * centre of mass of the report sits at the origin: added solids opaque, removals ghosted
  * (translucent, drawn after the solids), point masses as small markers, the three principal axes
  * as rods coloured by role, and the intended spin axis as a dark rod with a ring around it.
+ * Uploaded meshes come from `uploaded` (times their `scale`, drawn two-sided since a file's facing
+ * is its own); one not at hand yet, or that failed, is left out and listed in `uploadedMeshes`.
  */
-export function buildPartScene(doc: PartDocument, report: SpinReport): PartScene {
+export function buildPartScene(doc: PartDocument, report: SpinReport, uploaded?: UploadedMeshLookup): PartScene {
   const body = new Group();
   body.name = 'body';
   const solids = new Group();
@@ -33,9 +48,12 @@ export function buildPartScene(doc: PartDocument, report: SpinReport): PartScene
 
   const solid = new MeshStandardMaterial({ color: VIEWER_COLOURS.solid, roughness: 0.65, metalness: 0.05 });
   const removal = new MeshStandardMaterial({ color: VIEWER_COLOURS.removal, transparent: true, opacity: 0.35, depthWrite: false, side: DoubleSide });
+  const twoSided = { add: solid.clone(), remove: removal };
+  twoSided.add.side = DoubleSide;
   const placement = new Matrix4();
   const points: Group[] = [];
   const notDrawn: string[] = [];
+  const uploadedMeshes: UploadedMeshStatus = { drawn: [], pending: [], failed: [] };
   for (const p of doc.primitives) {
     placementMatrix(placement, p.position, p.rotationDeg);
     if (p.shape === 'point') {
@@ -46,12 +64,22 @@ export function buildPartScene(doc: PartDocument, report: SpinReport): PartScene
       points.push(marker);
       continue;
     }
-    const geometry = primitiveGeometry(p);
+    let geometry = primitiveGeometry(p);
+    let material = p.mode === 'remove' ? removal : solid;
+    if (!geometry && p.shape === 'mesh' && p.meshId) {
+      const found: MeshGeometryState = uploaded ? uploaded(p.meshId, p.scale ?? 1) : { state: 'failed', message: 'this view has no access to uploaded meshes' };
+      if (found.state === 'ready') {
+        geometry = found.geometry;
+        material = p.mode === 'remove' ? twoSided.remove : twoSided.add;
+        uploadedMeshes.drawn.push(p.id);
+      } else if (found.state === 'pending') uploadedMeshes.pending.push(p.id);
+      else uploadedMeshes.failed.push({ id: p.id, message: found.message });
+    }
     if (!geometry) {
       notDrawn.push(p.id);
       continue;
     }
-    const mesh = new Mesh(geometry, p.mode === 'remove' ? removal : solid);
+    const mesh = new Mesh(geometry, material);
     mesh.name = `${p.mode}:${p.id}`;
     mesh.matrixAutoUpdate = false;
     mesh.matrix.copy(placement);
@@ -81,7 +109,7 @@ export function buildPartScene(doc: PartDocument, report: SpinReport): PartScene
   ring.position.y = reach * 1.2;
   spin.add(ring);
   body.add(spin);
-  return { body, reach, notDrawn };
+  return { body, reach, notDrawn, uploadedMeshes };
 }
 
 /** Largest distance from `centre` to a corner of `box`. */
