@@ -60,13 +60,11 @@ async function signIn(page: Page, email: string): Promise<void> {
 }
 
 /**
- * Shows the sign-off panel of variant `number` in the part editor. The editor does not yet open the
- * variant named in `?variant=…&panel=review` by itself, so the flow opens its report from the
- * variant history; the panel loads when it scrolls into view.
+ * The sign-off panel of variant `number` on a part editor opened at `?variant=…&panel=review` (the
+ * review e-mail's link): the variant's report is already open and its sign-off loads in view.
  */
-async function openSignOff(page: Page, number: number) {
-  await page.locator(`[data-testid="variant-row"][data-variant-number="${number}"] [data-testid="variant-open"]`).click();
-  await byTestId(page, 'sign-off-slot').scrollIntoViewIfNeeded();
+async function linkedSignOff(page: Page, number: number) {
+  await page.locator(`[data-testid="variant-row"][data-variant-number="${number}"] [data-testid="variant-open"][aria-pressed="true"]`).waitFor();
   const panel = byTestId(page, 'sign-off-panel');
   await panel.locator('[data-testid="status-chip"]').waitFor();
   return panel;
@@ -178,7 +176,7 @@ it('plays the tumble preview, compares two variants, downloads a PDF, and gets a
   // Ask the demo reviewer for a review from the part editor's review panel.
   const mailsBefore = (await mailsTo(REVIEWER)).length;
   await page.goto(`${partPath}?variant=${v1.id}&panel=review`);
-  const panel = await openSignOff(page, 1);
+  const panel = await linkedSignOff(page, 1);
   await byTestId(page, 'review-reviewer').click();
   await page.locator(`[data-testid="review-reviewer-${REVIEWER}"]`).click();
   await byTestId(page, 'review-message').fill('The face spin flips, as expected; please confirm before we cut the normal-spin version.');
@@ -194,7 +192,9 @@ it('plays the tumble preview, compares two variants, downloads a PDF, and gets a
   await signIn(other, REVIEWER);
   await other.goto(`${baseUrl()}/review/${v1.id}`);
   await other.waitForURL(new RegExp(`/projects/${project.id}/parts/${part.id}\\?variant=${v1.id}&panel=review`));
-  const reviewPanel = await openSignOff(other, 1);
+  // The link lands on that variant's report with its sign-off in view: nothing to click.
+  const reviewPanel = await linkedSignOff(other, 1);
+  await reviewPanel.locator('[data-testid="status-chip"][data-status="in_review"]').waitFor();
   await byTestId(other, 'review-approve').waitFor();
   expect(await byTestId(other, 'review-request-form').count()).toBe(0);
   await expectAccessible(other, '15-reviewer-before-decision');

@@ -5,7 +5,7 @@ import { MATERIAL_ANIMATIONS } from '@angular/material/core';
 import { provideRouter } from '@angular/router';
 import { AuthState, authInterceptor, errorInterceptor } from '@tumblewise/api-client';
 import { analyzePart } from '@tumblewise/engine';
-import type { Part, Role } from '@tumblewise/shared';
+import type { Part, PartDocument, Role, Variant } from '@tumblewise/shared';
 import { AUTOSAVE_DEBOUNCE_MS } from './autosave-drafts';
 import { ANALYSIS_DEBOUNCE_MS } from './live-analysis';
 import { PartEditor } from './part-editor';
@@ -55,7 +55,7 @@ describe('PartEditor', () => {
     fixture.detectChanges();
   }
 
-  async function open(role: Role = 'designer'): Promise<void> {
+  async function open(role: Role = 'designer', variants: Variant[] = [], linkedVariant?: string): Promise<void> {
     jest.useFakeTimers();
     localStorage.clear();
     TestBed.configureTestingModule({
@@ -79,13 +79,14 @@ describe('PartEditor', () => {
     fixture = TestBed.createComponent(PartEditor);
     fixture.componentRef.setInput('projectId', PROJECT_ID);
     fixture.componentRef.setInput('partId', PART_ID);
+    if (linkedVariant) fixture.componentRef.setInput('variant', linkedVariant);
     host = fixture.nativeElement;
     fixture.detectChanges();
     await settle();
     backend.expectOne(`${BASE}/parts/${PART_ID}`).flush(PART);
     backend.expectOne(`${BASE}/projects/${PROJECT_ID}`).flush({ id: PROJECT_ID, name: 'Juggling baton', category: 'juggling', notes: '', archived: false, createdAt: PART.createdAt, updatedAt: PART.updatedAt });
     backend.expectOne(`${BASE}/materials`).flush([]);
-    backend.expectOne(`${BASE}/parts/${PART_ID}/variants`).flush([]);
+    backend.expectOne(`${BASE}/parts/${PART_ID}/variants`).flush(variants);
     await settle();
   }
 
@@ -222,5 +223,22 @@ describe('PartEditor', () => {
     expect(host.querySelector('[data-testid="error-banner"]')!.textContent).toContain('The variant was not saved.');
     expect(host.querySelector('[data-testid="error-density"]')!.textContent).toContain('Density leaves no mass after the removals.');
     expect(host.querySelectorAll('[data-testid="variant-row"]')).toHaveLength(0);
+  });
+
+  it('opens the variant named in the address (the review e-mail link) once the list has loaded', async () => {
+    const document = PART.draft as PartDocument;
+    const linked: Variant = {
+      id: '30000000-0000-4000-8000-000000000007', partId: PART_ID, number: 4, label: 'linked', notes: '', document, report: analyzePart(document),
+      engineVersion: 'engine test', status: 'in_review', author: null, version: 2, createdAt: PART.createdAt, updatedAt: PART.updatedAt,
+    };
+    await open('reviewer', [linked], linked.id);
+    expect(host.querySelector('[data-testid="back-to-live"]')).not.toBeNull();
+    expect(host.querySelector('[data-testid="sign-off-slot"]')?.getAttribute('data-variant-id')).toBe(linked.id);
+    expect(host.textContent).toContain('linked');
+
+    // Closed by the reader, it stays closed: the address opens it once.
+    host.querySelector<HTMLButtonElement>('[data-testid="back-to-live"]')!.click();
+    await settle();
+    expect(host.querySelector('[data-testid="sign-off-slot"]')).toBeNull();
   });
 });

@@ -77,6 +77,10 @@ export class PartEditor {
   readonly projectId = input.required<string>();
   /** Route parameter `:partId`. */
   readonly partId = input.required<string>();
+  /** Query parameter `variant`: a variant to open in the report panel at once (the review e-mail's link). */
+  readonly variant = input<string | undefined>(undefined);
+  /** Query parameter `panel`: `review` also brings that variant's sign-off into view. */
+  readonly panel = input<string | undefined>(undefined);
 
   protected readonly state = inject(PartEditorState);
   protected readonly workspace = inject(WorkspaceContext);
@@ -127,6 +131,22 @@ export class PartEditor {
   private readonly saveIssues = signal<FieldIssues>({});
   /** The variant open read-only in the report panel. */
   protected readonly openedVariant = signal<Variant | null>(null);
+  /** Whether the open variant's sign-off loads at once and scrolls into view (`panel=review`). */
+  protected readonly revealSignOff = signal(false);
+  /** The `variant` of the address already opened (it opens once; the designer may close it after). */
+  private linkedVariantOpened: string | null = null;
+  private readonly openLinkedVariant = effect(() => {
+    const wanted = this.variant();
+    const list = this.variants.value();
+    if (!wanted || !list || this.linkedVariantOpened === wanted) return;
+    const found = list.find((v) => v.id === wanted);
+    if (!found) return;
+    this.linkedVariantOpened = wanted;
+    untracked(() => {
+      this.openedVariant.set(found);
+      this.revealSignOff.set(this.panel() === 'review');
+    });
+  });
 
   protected readonly analysis = signal<LiveAnalysis>(IDLE_ANALYSIS);
   protected readonly clientIssues = computed(() => documentIssues(this.state.document()));
@@ -284,6 +304,7 @@ export class PartEditor {
   /** Shows a variant read-only in the report panel, or the live report again. */
   protected openVariant(variant: Variant | null): void {
     this.openedVariant.set(variant);
+    this.revealSignOff.set(false);
   }
 
   /** Shows a variant's new sign-off status in the history and the open report. */
