@@ -11,6 +11,7 @@ export const routes: Routes = [
   // Compare, scatter study and the review e-mail's link.
   { path: 'projects/:projectId/parts/:partId/compare', title: 'Compare variants · Tumblewise', canActivate: [requireSession], loadComponent: () => import('./features/compare/compare').then((m) => m.Compare) },
   { path: 'projects/:projectId/parts/:partId/scatter', title: 'Scatter study · Tumblewise', canActivate: [requireSession], loadComponent: () => import('./features/scatter/scatter-study').then((m) => m.ScatterStudyPage) },
+  { path: 'projects/:projectId/parts/:partId/measurements', title: 'Measured data · Tumblewise', canActivate: [requireSession], loadComponent: () => import('./features/measurements/measured-data').then((m) => m.MeasuredData) },
   { path: 'review/:variantId', title: 'Open for review · Tumblewise', canActivate: [requireSession], loadComponent: () => import('./features/review-link/review-link').then((m) => m.ReviewLink) },
   { path: 'signin', title: 'Sign in · Tumblewise', loadComponent: () => import('./features/sign-in/sign-in').then((m) => m.SignIn) },
   { path: 'signup', title: 'Create a workspace · Tumblewise', canActivate: [redirectSignedIn], loadComponent: () => import('./features/sign-up/sign-up').then((m) => m.SignUp) },

@@ -1,0 +1,247 @@
+import { NgTemplateOutlet } from '@angular/common';
+import { ChangeDetectionStrategy, Component, computed, DestroyRef, effect, inject, input, signal, untracked } from '@angular/core';
+import { rxResource } from '@angular/core/rxjs-interop';
+import { MatButton } from '@angular/material/button';
+import { MatFormField, MatLabel } from '@angular/material/form-field';
+import { MatInput } from '@angular/material/input';
+import { MatProgressBar } from '@angular/material/progress-bar';
+import { ActivatedRoute, Router, RouterLink } from '@angular/router';
+import { csvProblemsOf, MeasurementsApi, PartsApi, ProjectsApi, saveBlob, SettingsApi, toApiError, VariantsApi, WorkspaceContext, type CsvProblem } from '@tumblewise/api-client';
+import type { Measurement, Variant } from '@tumblewise/shared';
+import { EmptyState, ErrorBanner, LoadingState, PageHeader, StatusChip } from '@tumblewise/ui';
+import type { Subscription } from 'rxjs';
+import {
+  comparedWith,
+  DIFFERENCE_FLAG_PERCENT,
+  describeDifference,
+  EXAMPLE_CSV,
+  fileRefusal,
+  formatEntered,
+  formatMoment,
+  formatRecorded,
+  templateCsv,
+  templateFileName,
+  type InertiaUnit,
+} from './measured-figures';
+
+/** The label a variant goes by ("v2 spin about face normal"). */
+export function variantName(v: Pick<Variant, 'number' | 'label'>): string {
+  return `v${v.number}${v.label ? ` ${v.label}` : ''}`;
+}
+
+/** The unit moments are shown in when the workspace settings cannot be read (the server's default). */
+const FALLBACK_UNIT: InertiaUnit = 'g·cm²';
+
+/**
+ * Measured data of a part: the rig readings of a variant's prototype beside the moments the
+ * variant predicts, with the difference in per cent flagged beyond our threshold; a CSV import
+ * (file picker or drop) that either imports every row or lists the problems by line; a template to
+ * fill in. The variant lives in the address (`?variant=`), so the part editor can link to one.
+ */
+@Component({
+  selector: 'tw-measured-data',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+  imports: [NgTemplateOutlet, RouterLink, MatButton, MatFormField, MatLabel, MatInput, MatProgressBar, PageHeader, StatusChip, EmptyState, ErrorBanner, LoadingState],
+  templateUrl: './measured-data.html',
+  styleUrl: './measured-data.scss',
+})
+export class MeasuredData {
+  /** Route parameter. */
+  readonly projectId = input.required<string>();
+  /** Route parameter. */
+  readonly partId = input.required<string>();
+  /** Query parameter: the variant whose prototype was measured; the newest when absent. */
+  readonly variant = input<string | undefined>();
+
+  protected readonly workspace = inject(WorkspaceContext);
+  private readonly projectsApi = inject(ProjectsApi);
+  private readonly partsApi = inject(PartsApi);
+  private readonly variantsApi = inject(VariantsApi);
+  private readonly settingsApi = inject(SettingsApi);
+  private readonly measurementsApi = inject(MeasurementsApi);
+  private readonly router = inject(Router);
+  private readonly route = inject(ActivatedRoute);
+
+  protected readonly threshold = DIFFERENCE_FLAG_PERCENT;
+  protected readonly example = EXAMPLE_CSV;
+  protected readonly variantName = variantName;
+  protected readonly comparedWith = comparedWith;
+  protected readonly formatEntered = formatEntered;
+  protected readonly formatRecorded = formatRecorded;
+  /** Designers, admins and owners import; reviewers read. */
+  protected readonly mayImport = computed(() => this.workspace.can('projects.edit'));
+
+  private readonly scope = computed(() => {
+    const workspaceId = this.workspace.workspaceId();
+    return workspaceId ? { workspaceId, projectId: this.projectId(), partId: this.partId() } : undefined;
+  });
+  protected readonly project = rxResource({ params: () => this.scope(), stream: ({ params }) => this.projectsApi.get(params.workspaceId, params.projectId) });
+  protected readonly part = rxResource({ params: () => this.scope(), stream: ({ params }) => this.partsApi.get(params.workspaceId, params.partId) });
+  protected readonly variants = rxResource({ params: () => this.scope(), stream: ({ params }) => this.variantsApi.list(params.workspaceId, params.partId) });
+  private readonly settings = rxResource({ params: () => this.workspace.workspaceId() ?? undefined, stream: ({ params }) => this.settingsApi.get(params) });
+
+  /** The workspace's inertia display unit; the default when the settings could not be read. */
+  protected readonly unit = computed<InertiaUnit>(() => (this.settings.hasValue() ? this.settings.value().displayUnits.inertia : FALLBACK_UNIT));
+  protected readonly unitFallback = computed(() => !!this.settings.error());
+
+  protected readonly list = computed<Variant[]>(() => (this.variants.hasValue() ? this.variants.value() : []));
+  /** The variant shown: the one in the address, else the newest; null when the address names none of this part's. */
+  protected readonly chosen = computed<Variant | null>(() => {
+    const list = this.list();
+    const asked = this.variant();
+    return asked ? (list.find((v) => v.id === asked) ?? null) : (list[list.length - 1] ?? null);
+  });
+
+  protected readonly measurements = rxResource({
+    params: () => {
+      const workspaceId = this.workspace.workspaceId();
+      const variant = this.chosen();
+      return workspaceId && variant ? { workspaceId, variantId: variant.id } : undefined;
+    },
+    stream: ({ params }) => this.measurementsApi.list(params.workspaceId, params.variantId),
+  });
+
+  protected readonly loadError = computed(() => {
+    const error = this.variants.error() ?? this.part.error();
+    return error ? toApiError(error).message : null;
+  });
+  protected readonly rowsError = computed(() => {
+    const error = this.measurements.error();
+    return error ? toApiError(error).message : null;
+  });
+  protected readonly rows = computed(() => {
+    const unit = this.unit();
+    const fresh = this.freshIds();
+    const list: Measurement[] = this.measurements.hasValue() ? this.measurements.value() : [];
+    return list.map((m) => ({
+      ...m,
+      shownValue: formatMoment(m.value, unit),
+      shownPredicted: formatMoment(m.predicted, unit),
+      difference: describeDifference(m.differencePercent),
+      fresh: fresh.has(m.id),
+    }));
+  });
+  protected readonly farCount = computed(() => this.rows().filter((r) => r.difference.state === 'far').length);
+
+  // Import state.
+  protected readonly importing = signal(false);
+  /** Share of the file sent (0…1), null while unknown. */
+  protected readonly progress = signal<number | null>(null);
+  protected readonly problems = signal<CsvProblem[]>([]);
+  protected readonly importFailure = signal<string | null>(null);
+  protected readonly imported = signal<{ count: number; file: string } | null>(null);
+  protected readonly dragging = signal(false);
+  /** Ids of the rows the last import added (marked in the table). */
+  private readonly freshIds = signal<ReadonlySet<string>>(new Set());
+  private upload: Subscription | null = null;
+
+  constructor() {
+    // Without ?variant= the newest is shown; write it into the address so the link can be shared.
+    effect(() => {
+      const chosen = this.chosen();
+      if (chosen && !this.variant()) untracked(() => this.writeAddress(chosen.id));
+    });
+    inject(DestroyRef).onDestroy(() => this.upload?.unsubscribe());
+  }
+
+  /** The picker changed: show that variant's readings. */
+  protected chooseVariant(id: string): void {
+    if (!id || id === this.chosen()?.id) return;
+    this.clearImportMessages();
+    this.freshIds.set(new Set());
+    this.writeAddress(id);
+  }
+
+  /** A file came from the picker. */
+  protected filePicked(event: Event): void {
+    const field = event.target as HTMLInputElement;
+    const file = field.files?.[0];
+    // Let the same file be picked again after fixing it.
+    field.value = '';
+    if (file) this.importFile(file);
+  }
+
+  protected dragOver(event: DragEvent): void {
+    if (!this.mayImport() || this.importing()) return;
+    event.preventDefault();
+    if (event.dataTransfer) event.dataTransfer.dropEffect = 'copy';
+    this.dragging.set(true);
+  }
+
+  protected dragLeave(): void {
+    this.dragging.set(false);
+  }
+
+  protected dropped(event: DragEvent): void {
+    event.preventDefault();
+    this.dragging.set(false);
+    if (!this.mayImport() || this.importing()) return;
+    const files = event.dataTransfer?.files;
+    if (!files?.length) return;
+    if (files.length > 1) {
+      this.clearImportMessages();
+      this.importFailure.set('Drop one CSV file at a time.');
+      return;
+    }
+    this.importFile(files[0]);
+  }
+
+  /** Sends one CSV; every row is imported, or none and the problems are listed by line. */
+  protected importFile(file: File): void {
+    const workspaceId = this.workspace.workspaceId();
+    const variant = this.chosen();
+    if (!workspaceId || !variant || this.importing() || !this.mayImport()) return;
+    this.clearImportMessages();
+    const refusal = fileRefusal(file);
+    if (refusal) {
+      this.importFailure.set(refusal);
+      return;
+    }
+    this.importing.set(true);
+    this.progress.set(0);
+    this.upload = this.measurementsApi.upload(workspaceId, variant.id, file, file.name).subscribe({
+      next: (step) => {
+        if (step.kind === 'progress') {
+          this.progress.set(step.fraction);
+          return;
+        }
+        this.importing.set(false);
+        this.imported.set({ count: step.rows.length, file: file.name });
+        this.freshIds.set(new Set(step.rows.map((r) => r.id)));
+        this.measurements.reload();
+      },
+      error: (error: unknown) => {
+        this.importing.set(false);
+        const fault = toApiError(error);
+        const problems = csvProblemsOf(fault);
+        if (problems.length) this.problems.set(problems);
+        else this.importFailure.set(`“${file.name}” was not imported: ${fault.message}`);
+      },
+    });
+  }
+
+  /** Saves a CSV to fill in, in the workspace's unit, made here in the browser. */
+  protected downloadTemplate(): void {
+    const variant = this.chosen();
+    const name = templateFileName(this.part.hasValue() ? this.part.value().name : 'part', variant?.number ?? 1);
+    saveBlob(new Blob([templateCsv(this.unit())], { type: 'text/csv;charset=utf-8' }), name);
+  }
+
+  /** Loads everything again after a failure. */
+  protected reload(): void {
+    this.project.reload();
+    this.part.reload();
+    this.variants.reload();
+    this.settings.reload();
+  }
+
+  private clearImportMessages(): void {
+    this.problems.set([]);
+    this.importFailure.set(null);
+    this.imported.set(null);
+  }
+
+  private writeAddress(variantId: string): void {
+    void this.router.navigate([], { relativeTo: this.route, queryParams: { variant: variantId }, queryParamsHandling: 'merge', replaceUrl: true });
+  }
+}
