@@ -91,4 +91,16 @@ describe('the primitive form model', () => {
     const back = formValueToPrimitive({ ...primitiveToFormValue(HANDLE), innerRadius: 14 }, HANDLE);
     expect(documentIssues(documentWith(back))['primitives[0].innerRadius']).toBe('must be less than radius');
   });
+
+  it('keeps a mesh primitive’s uploaded mesh and scale, and takes the one the picker chooses', () => {
+    const scan: DraftPrimitive = { id: 'head', shape: 'mesh', meshId: 'mesh-a', scale: 0.001, position: [0, 0, 0.4], rotationDeg: [0, 0, 0], density: 1150, mode: 'add' };
+    const value = primitiveToFormValue(scan);
+    expect(value).toMatchObject({ meshId: 'mesh-a', scale: 0.001, position_2: 400 });
+    expect(formValueToPrimitive(value, scan)).toEqual(scan);
+    expect(formValueToPrimitive({ ...value, meshId: 'mesh-b' }, scan)['meshId']).toBe('mesh-b');
+    // No mesh chosen: the reference is left out (the engine then asks for one); a cleared scale is null for the schema to name.
+    const cleared = formValueToPrimitive({ ...value, meshId: '', scale: '' }, scan);
+    expect('meshId' in cleared).toBe(false);
+    expect(documentIssues(documentWith(cleared))['primitives[0].scale']).toBeDefined();
+  });
 });

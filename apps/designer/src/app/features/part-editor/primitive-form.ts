@@ -8,6 +8,7 @@ import type { Material } from '@tumblewise/shared';
 import { FieldErrorPipe } from '@tumblewise/ui';
 import type { Subscription } from 'rxjs';
 import { issueAt, type FieldIssues } from './document-issues';
+import { MeshPicker } from './mesh-picker';
 import type { DraftPrimitive } from './draft-document';
 import { SHAPE_FIELDS, shapeLabel, type DimensionField } from './primitive-fields';
 import { formValueToPrimitive, numericControls, primitiveToFormValue, type NumericControl, type PrimitiveFormValue } from './primitive-form-model';
@@ -26,7 +27,7 @@ export interface PrimitiveChange {
 @Component({
   selector: 'tw-primitive-form',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatError, MatHint, MatSuffix, MatInput, MatSelect, MatOption, MatButtonToggleGroup, MatButtonToggle, FieldErrorPipe],
+  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatError, MatHint, MatSuffix, MatInput, MatSelect, MatOption, MatButtonToggleGroup, MatButtonToggle, FieldErrorPipe, MeshPicker],
   templateUrl: './primitive-form.html',
   styleUrl: './primitive-form.scss',
 })
@@ -59,6 +60,11 @@ export class PrimitiveForm {
   protected readonly inlineMesh = computed(() => {
     const p = this.primitive();
     return Array.isArray(p['triangles']) ? (p['triangles'] as unknown[]).length : null;
+  });
+  /** A problem with the mesh reference (document check or server), for the mesh picker. */
+  protected readonly meshProblem = computed(() => {
+    const message = issueAt(this.issues(), `primitives[${this.index()}].meshId`);
+    return message ? `Mesh ${message}` : null;
   });
   protected readonly selectedMaterial = computed(() => {
     const id = this.primitive()['materialId'];

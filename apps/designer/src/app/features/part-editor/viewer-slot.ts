@@ -1,7 +1,20 @@
-import { ChangeDetectionStrategy, Component, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject, input, signal } from '@angular/core';
+import { MeshesApi, WorkspaceContext } from '@tumblewise/api-client';
 import type { SpinReport } from '@tumblewise/engine';
 import type { PartDocument } from '@tumblewise/shared';
-import { TwPartViewer } from '@tumblewise/viewer';
+import { MESH_GEOMETRY_SOURCE, TwPartViewer, type MeshGeometrySource, type UploadedMeshStatus } from '@tumblewise/viewer';
+import { firstValueFrom } from 'rxjs';
+
+/** The viewer's uploaded meshes come from the current workspace's stored STL files. */
+function workspaceMeshSource(): MeshGeometrySource {
+  const api = inject(MeshesApi);
+  const workspace = inject(WorkspaceContext);
+  return (meshId) => {
+    const workspaceId = workspace.workspaceId();
+    if (!workspaceId) return Promise.reject(new Error('no workspace is open'));
+    return firstValueFrom(api.geometry(workspaceId, meshId));
+  };
+}
 
 /**
  * The slot of the 3-D view and tumble preview (`TwPartViewer` from `@tumblewise/viewer`). The viewer
@@ -12,11 +25,17 @@ import { TwPartViewer } from '@tumblewise/viewer';
   selector: 'tw-viewer-slot',
   changeDetection: ChangeDetectionStrategy.OnPush,
   imports: [TwPartViewer],
+  providers: [{ provide: MESH_GEOMETRY_SOURCE, useFactory: workspaceMeshSource }],
   template: `
     <section class="tw-viewer-slot" aria-label="3-D view" data-testid="viewer-slot">
       @defer (on viewport) {
         @if (document() && report()) {
-          <tw-part-viewer [document]="document()!" [report]="report()!" />
+          <tw-part-viewer [document]="document()!" [report]="report()!" (uploadedMeshes)="meshes.set($event)" />
+          @for (f of meshes().failed; track f.id) {
+            <p class="tw-mesh-note" role="status" data-testid="viewer-mesh-note">
+              The uploaded mesh “{{ f.id }}” is not drawn ({{ f.message }}); the spin report still counts it.
+            </p>
+          }
         } @else {
           <div class="tw-placeholder" data-testid="viewer-placeholder">
             <span class="material-icons" aria-hidden="true">view_in_ar</span>
@@ -49,6 +68,11 @@ import { TwPartViewer } from '@tumblewise/viewer';
     .material-icons {
       font-size: 36px;
     }
+    .tw-mesh-note {
+      margin: 0;
+      padding: 8px 16px;
+      font: var(--mat-sys-body-small);
+    }
   `,
 })
 export class ViewerSlot {
@@ -56,4 +80,6 @@ export class ViewerSlot {
   readonly document = input<PartDocument | null>(null);
   /** Its spin report, or null. */
   readonly report = input<SpinReport | null>(null);
+  /** Where the viewer's uploaded meshes stand (a note for each that could not be drawn). */
+  protected readonly meshes = signal<UploadedMeshStatus>({ drawn: [], pending: [], failed: [] });
 }
