@@ -5,7 +5,7 @@ import { Observable, throwError } from 'rxjs';
 import { TestScheduler } from 'rxjs/testing';
 import { analysisRequest } from './document-issues';
 import type { DraftDocument } from './draft-document';
-import { liveAnalysis, type LiveAnalysis } from './live-analysis';
+import { ANALYSIS_DEBOUNCE_MS, liveAnalysis, type LiveAnalysis } from './live-analysis';
 
 const doc = (radius: number | null): DraftDocument => ({
   primitives: [{ id: 'grip', shape: 'cylinder', radius, length: 0.19, density: 650 }],
@@ -35,6 +35,16 @@ describe('liveAnalysis', () => {
       expectObservable(out.pipe(mapShape(shape))).toBe('--------------l-r', { l: 'loading:-', r: 'ready:0.0135' });
       scheduler.flush();
       expect(sent).toEqual([0.0135]);
+    });
+  });
+
+  it('by default waits ANALYSIS_DEBOUNCE_MS of quiet, restarted by every keystroke', () => {
+    scheduler.run(({ cold, hot, expectObservable }) => {
+      const analyze = (d: DraftDocument) => cold('-r|', { r: reportFor(d) });
+      // Two keystrokes 5 ms apart: the quiet time counts from the second one.
+      const docs = hot('a 4ms b', { a: doc(0.01), b: doc(0.012) });
+      const out = liveAnalysis(docs, prepare, analyze);
+      expectObservable(out.pipe(mapShape(shape))).toBe(`${5 + ANALYSIS_DEBOUNCE_MS}ms l r`, { l: 'loading:-', r: 'ready:0.012' });
     });
   });
 
