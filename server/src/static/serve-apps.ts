@@ -1,19 +1,25 @@
 import express, { Router } from 'express';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
+import { compressedCopies } from './compressed-copies';
+
+/** Hashed assets (the builder names them `chunk-7BDNFNOT.js`) never change under their name; everything else is revalidated. */
+const cacheControl = (file: string) => (/-[0-9A-Z]{8}\.(js|css|woff2?)$/.test(file) ? 'public, max-age=31536000, immutable' : 'no-cache');
 
 /**
  * The built apps: admin at /admin/, designer at /. Unknown paths inside an app answer its
- * index.html so client-side routes survive a reload. Hashed assets are cached for a year.
+ * index.html so client-side routes survive a reload. Hashed assets are cached for a year. Text
+ * files go out brotli- or gzip-compressed to browsers that accept it.
  */
 export function serveApps(distDir: string): Router {
   const router = Router();
   const mount = (prefix: string, folder: string, name: string) => {
     const root = path.join(distDir, folder, 'browser');
     const index = path.join(root, 'index.html');
+    router.use(prefix, compressedCopies(root, cacheControl));
     router.use(prefix, express.static(root, {
       index: false,
-      setHeaders: (res, file) => { res.setHeader('Cache-Control', /\.[0-9a-z]{8,}\.(js|css|woff2?)$/i.test(file) ? 'public, max-age=31536000, immutable' : 'no-cache'); },
+      setHeaders: (res, file) => { res.setHeader('Cache-Control', cacheControl(file)); },
     }));
     router.get(prefix === '/' ? '/*splat' : `${prefix}{/*splat}`, (req, res, next) => {
       if (prefix === '/' && (req.path.startsWith('/api/') || req.path.startsWith('/admin'))) return next();
