@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { DataTypes, type QueryInterface, type Sequelize } from 'sequelize';
-import { MATERIAL_LIBRARY } from '../../materials/material-library';
+import { MATERIAL_LIBRARY } from './data/20261201-material-library';
 
 const uuid = { type: DataTypes.UUID, primaryKey: true, allowNull: false };
 const ref = (model: string, onDelete: 'CASCADE' | 'SET NULL' = 'CASCADE', allowNull = false) => ({

@@ -1,6 +1,8 @@
 /**
- * The global material library seeded into every installation: nominal densities of common
- * sports-equipment materials with a typical relative scatter and the source of each figure.
+ * The global material library as migration 20261201-0005 seeded it: frozen with that migration
+ * (migrations are history; a later change to the library is a new migration that updates rows).
+ * Nominal densities of common sports-equipment materials with a typical relative scatter and the
+ * source of each figure.
  * Wood figures: USDA Forest Products Laboratory, Wood Handbook (FPL-GTR-282, 2021), Table 5-3a/5-3b,
  * specific gravity at 12 % moisture content converted to density at 12 % MC as SG × 1000 × 1.12;
  * the specific gravities are quoted from memory of that table. Tolerances are common practice
