@@ -2,6 +2,7 @@ import type { Server } from 'node:http';
 import request from 'supertest';
 import { Workspace } from '../models/init-models';
 import { freePort } from '../../../infra/src/port-check';
+import { eventually } from '../test-support/eventually';
 import { bearer, signUp, startTestApp, type TestApp } from '../test-support/test-app';
 
 /**
@@ -24,10 +25,8 @@ afterAll(async () => {
   await t.close();
 });
 
-async function until(check: () => Promise<boolean>) {
-  for (let i = 0; i < 400; i++) { if (await check()) return; await new Promise((r) => setTimeout(r, 50)); }
-  throw new Error('the event did not arrive');
-}
+/** Waits for the provider's event to reach the workspace row. */
+const until = (check: () => Promise<boolean>) => eventually(check, (ok) => ok, { what: 'the provider event', timeoutMs: 20_000 });
 
 it('turns past due on a failed renewal and back on a paid one', async () => {
   const owner = await signUp(t.app);

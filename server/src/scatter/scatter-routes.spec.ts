@@ -1,6 +1,7 @@
 import request from 'supertest';
 import racket from '../../../shared/src/engine/examples/junior-racket.json';
 import { ScatterStudy } from '../models/init-models';
+import { eventually } from '../test-support/eventually';
 import { bearer, signUp, startTestApp, type TestApp } from '../test-support/test-app';
 
 let t: TestApp;
@@ -18,13 +19,12 @@ beforeAll(async () => {
 afterAll(async () => { await t.close(); }, 30000);
 
 async function until(studyId: string, done: (s: { state: string; progress: number }) => boolean, seen: string[] = []) {
-  for (let i = 0; i < 600; i++) {
+  const probe = async () => {
     const s = (await request(t.app).get(`${base}/scatter/${studyId}`).set(bearer(owner.accessToken)).expect(200)).body;
     if (seen[seen.length - 1] !== `${s.state}`) seen.push(s.state);
-    if (done(s)) return s;
-    await new Promise((r) => setTimeout(r, 50));
-  }
-  throw new Error('the study did not get there in time');
+    return s as { state: string; progress: number };
+  };
+  return eventually(probe, done, { what: 'the study reaching that state', timeoutMs: 30_000 });
 }
 
 it('runs a study as a job: queued → running with progress → done, reproducible by seed', async () => {

@@ -1,3 +1,5 @@
+import { eventually } from './eventually';
+
 /** Reads mail received by the test maildev through its REST API (`/api/email`). */
 export interface ReceivedMail {
   id: string;
@@ -16,13 +18,10 @@ export async function mailsTo(address: string, inboxUrl = process.env.MAIL_INBOX
 
 /** Waits for the newest mail to `address` (mail sending is asynchronous for some routes). */
 export async function waitForMail(address: string, options: { count?: number; timeoutMs?: number; inboxUrl?: string } = {}): Promise<ReceivedMail> {
-  const deadline = Date.now() + (options.timeoutMs ?? 10000);
-  for (;;) {
-    const mails = await mailsTo(address, options.inboxUrl);
-    if (mails.length >= (options.count ?? 1)) return mails[mails.length - 1];
-    if (Date.now() > deadline) throw new Error(`no mail to ${address} within ${options.timeoutMs ?? 10000} ms`);
-    await new Promise((r) => setTimeout(r, 100));
-  }
+  const mails = await eventually(() => mailsTo(address, options.inboxUrl), (m) => m.length >= (options.count ?? 1), {
+    what: `mail to ${address}`, timeoutMs: options.timeoutMs ?? 10000, intervalMs: 100,
+  });
+  return mails[mails.length - 1];
 }
 
 /** The token of the first link in a mail whose path matches (e.g. `/invitations/accept`). */
