@@ -7,18 +7,7 @@ import { MatError, MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatPaginator, PageEvent } from '@angular/material/paginator';
 import { MatOption, MatSelect } from '@angular/material/select';
-import {
-  MatCell,
-  MatCellDef,
-  MatColumnDef,
-  MatHeaderCell,
-  MatHeaderCellDef,
-  MatHeaderRow,
-  MatHeaderRowDef,
-  MatRow,
-  MatRowDef,
-  MatTable,
-} from '@angular/material/table';
+import { MatTableModule } from '@angular/material/table';
 import { AuditApi, MembersApi, toApiError, WorkspaceContext } from '@tumblewise/api-client';
 import type { AuditEvent } from '@tumblewise/shared';
 import { EmptyState, ErrorBanner, FieldErrorPipe, LoadingState, PageHeader } from '@tumblewise/ui';
@@ -49,16 +38,7 @@ function rangeInOrder(group: AbstractControl): ValidationErrors | null {
     MatOption,
     MatButton,
     MatPaginator,
-    MatTable,
-    MatColumnDef,
-    MatHeaderCell,
-    MatHeaderCellDef,
-    MatCell,
-    MatCellDef,
-    MatHeaderRow,
-    MatHeaderRowDef,
-    MatRow,
-    MatRowDef,
+    MatTableModule,
     PageHeader,
     EmptyState,
     ErrorBanner,

@@ -7,18 +7,7 @@ import { MatError, MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { RouterLink } from '@angular/router';
-import {
-  MatCell,
-  MatCellDef,
-  MatColumnDef,
-  MatHeaderCell,
-  MatHeaderCellDef,
-  MatHeaderRow,
-  MatHeaderRowDef,
-  MatRow,
-  MatRowDef,
-  MatTable,
-} from '@angular/material/table';
+import { MatTableModule } from '@angular/material/table';
 import { InvitationsApi, toApiError, WorkspaceContext } from '@tumblewise/api-client';
 import { can, canAssignRole, emailSchema, ROLES, type Invitation, type Role } from '@tumblewise/shared';
 import {
@@ -51,16 +40,7 @@ import { deliveryLabel, mayResend, mayRevoke, STATUS_LABELS } from './invitation
     MatSelect,
     MatOption,
     MatButton,
-    MatTable,
-    MatColumnDef,
-    MatHeaderCell,
-    MatHeaderCellDef,
-    MatCell,
-    MatCellDef,
-    MatHeaderRow,
-    MatHeaderRowDef,
-    MatRow,
-    MatRowDef,
+    MatTableModule,
     PageHeader,
     EmptyState,
     ErrorBanner,

@@ -1,18 +1,7 @@
 import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
-import {
-  MatCell,
-  MatCellDef,
-  MatColumnDef,
-  MatHeaderCell,
-  MatHeaderCellDef,
-  MatHeaderRow,
-  MatHeaderRowDef,
-  MatRow,
-  MatRowDef,
-  MatTable,
-} from '@angular/material/table';
+import { MatTableModule } from '@angular/material/table';
 import { RouterLink } from '@angular/router';
 import { BillingApi, toApiError, WorkspaceContext } from '@tumblewise/api-client';
 import type { Invoice } from '@tumblewise/shared';
@@ -27,16 +16,7 @@ import { INVOICE_STATUS_LABELS } from './invoice-status';
   imports: [
     DatePipe,
     RouterLink,
-    MatTable,
-    MatColumnDef,
-    MatHeaderCell,
-    MatHeaderCellDef,
-    MatCell,
-    MatCellDef,
-    MatHeaderRow,
-    MatHeaderRowDef,
-    MatRow,
-    MatRowDef,
+    MatTableModule,
     PageHeader,
     EmptyState,
     ErrorBanner,

@@ -6,20 +6,7 @@ import { MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { MatSort, MatSortHeader } from '@angular/material/sort';
-import {
-  MatCell,
-  MatCellDef,
-  MatColumnDef,
-  MatHeaderCell,
-  MatHeaderCellDef,
-  MatHeaderRow,
-  MatHeaderRowDef,
-  MatNoDataRow,
-  MatRow,
-  MatRowDef,
-  MatTable,
-  MatTableDataSource,
-} from '@angular/material/table';
+import { MatTableDataSource, MatTableModule } from '@angular/material/table';
 import { MatTooltip } from '@angular/material/tooltip';
 import { MaterialLibraryApi, toApiError, WorkspaceContext } from '@tumblewise/api-client';
 import { can, MATERIAL_FAMILIES, type Material } from '@tumblewise/shared';
@@ -34,17 +21,7 @@ import { materialMatchesFilter, materialSortValue, type MaterialFilter } from '.
   selector: 'tw-material-library',
   changeDetection: ChangeDetectionStrategy.OnPush,
   imports: [
-    MatTable,
-    MatColumnDef,
-    MatHeaderCell,
-    MatHeaderCellDef,
-    MatCell,
-    MatCellDef,
-    MatHeaderRow,
-    MatHeaderRowDef,
-    MatRow,
-    MatRowDef,
-    MatNoDataRow,
+    MatTableModule,
     MatSort,
     MatSortHeader,
     MatFormField,

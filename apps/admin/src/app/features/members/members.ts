@@ -6,20 +6,7 @@ import { MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect, MatSelectChange } from '@angular/material/select';
 import { MatSort, MatSortHeader } from '@angular/material/sort';
-import {
-  MatCell,
-  MatCellDef,
-  MatColumnDef,
-  MatHeaderCell,
-  MatHeaderCellDef,
-  MatHeaderRow,
-  MatHeaderRowDef,
-  MatNoDataRow,
-  MatRow,
-  MatRowDef,
-  MatTable,
-  MatTableDataSource,
-} from '@angular/material/table';
+import { MatTableDataSource, MatTableModule } from '@angular/material/table';
 import { MatTooltip } from '@angular/material/tooltip';
 import { AuthApi, AuthState, MembersApi, toApiError, WorkspaceContext } from '@tumblewise/api-client';
 import { can, canAssignRole, ROLES, type Member, type Role } from '@tumblewise/shared';
@@ -33,17 +20,7 @@ import { memberMatchesFilter, memberSortValue } from './member-table';
   changeDetection: ChangeDetectionStrategy.OnPush,
   imports: [
     DatePipe,
-    MatTable,
-    MatColumnDef,
-    MatHeaderCell,
-    MatHeaderCellDef,
-    MatCell,
-    MatCellDef,
-    MatHeaderRow,
-    MatHeaderRowDef,
-    MatRow,
-    MatRowDef,
-    MatNoDataRow,
+    MatTableModule,
     MatSort,
     MatSortHeader,
     MatFormField,

@@ -8,18 +8,7 @@ import { MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { MatSort, MatSortHeader, type Sort } from '@angular/material/sort';
-import {
-  MatCell,
-  MatCellDef,
-  MatColumnDef,
-  MatHeaderCell,
-  MatHeaderCellDef,
-  MatHeaderRow,
-  MatHeaderRowDef,
-  MatRow,
-  MatRowDef,
-  MatTable,
-} from '@angular/material/table';
+import { MatTableModule } from '@angular/material/table';
 import { OperatorApi, toApiError } from '@tumblewise/api-client';
 import type { OperatorWorkspace } from '@tumblewise/shared';
 import { EmptyState, ErrorBanner, LoadingState, PageHeader } from '@tumblewise/ui';
@@ -45,16 +34,7 @@ import { SuspensionDialog, type SuspensionDialogData } from './suspension-dialog
     MatButton,
     MatSort,
     MatSortHeader,
-    MatTable,
-    MatColumnDef,
-    MatHeaderCell,
-    MatHeaderCellDef,
-    MatCell,
-    MatCellDef,
-    MatHeaderRow,
-    MatHeaderRowDef,
-    MatRow,
-    MatRowDef,
+    MatTableModule,
     PageHeader,
     EmptyState,
     ErrorBanner,
