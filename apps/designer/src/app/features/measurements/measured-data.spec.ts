@@ -105,7 +105,7 @@ describe('MeasuredData', () => {
       'Axis', 'Measured, as entered', 'Measured (kg·cm²)', 'Predicted (kg·cm²)', 'Difference', 'Method', 'Recorded',
     ]);
     expect(major.querySelector('th[scope="row"]')).not.toBeNull();
-    expect(text(testId('measurements-estimates'))).toContain('Both columns are estimates');
+    expect(text(testId('measurements-estimates'))).toContain('Measured and predicted values are both estimates');
     const crumbs = host.querySelector('nav[aria-label="Breadcrumb"]')!;
     expect(Array.from(crumbs.querySelectorAll('a, [aria-current]')).map(text)).toEqual(['Projects', 'Practice batons', 'Practice baton', 'Measured data']);
     expect(crumbs.querySelector('[aria-current="page"]')!.textContent).toBe('Measured data');

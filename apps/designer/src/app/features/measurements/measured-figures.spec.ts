@@ -67,7 +67,7 @@ describe('describeDifference', () => {
   });
 
   it('says so when there is no prediction for the axis', () => {
-    expect(describeDifference(null)).toEqual({ text: '—', state: 'none', words: 'no prediction for this axis', icon: 'remove' });
+    expect(describeDifference(null)).toEqual({ text: '—', state: 'none', words: 'no prediction for this axis', icon: '' });
   });
 });
 

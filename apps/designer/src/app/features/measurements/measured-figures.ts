@@ -41,14 +41,14 @@ export interface DifferenceShown {
   state: 'far' | 'near' | 'none';
   /** The same in words, for the flag beside the number and for screen readers. */
   words: string;
-  /** Material icon ligature of the flag. */
+  /** Material icon ligature of the flag; empty without a prediction (the dash says it). */
   icon: string;
 }
 
 /** Formats `differencePercent` ((measured − predicted) / predicted × 100) and flags it beyond `threshold` per cent. */
 export function describeDifference(percent: number | null, threshold = DIFFERENCE_FLAG_PERCENT): DifferenceShown {
   if (percent === null || !Number.isFinite(percent)) {
-    return { text: '—', state: 'none', words: 'no prediction for this axis', icon: 'remove' };
+    return { text: '—', state: 'none', words: 'no prediction for this axis', icon: '' };
   }
   const rounded = Math.round(percent * 10) / 10;
   const sign = rounded > 0 ? '+' : rounded < 0 ? '−' : '';
