@@ -1,3 +1,5 @@
+import http from 'node:http';
+import type { AddressInfo } from 'node:net';
 import request from 'supertest';
 import { analyzePart } from '@tumblewise/engine';
 import racket from '../../../shared/src/engine/examples/junior-racket.json';
@@ -76,5 +78,53 @@ describe('POST /simulate', () => {
     const done = await long;
     expect(done.status).toBe(200);
     expect(order).toEqual(['health', 'simulation']);
+  });
+});
+
+describe('a client that goes away', () => {
+  let server: http.Server;
+  let port = 0;
+  beforeAll(async () => {
+    server = await new Promise<http.Server>((resolve) => { const s = t.app.listen(0, '127.0.0.1', () => resolve(s)); });
+    port = (server.address() as AddressInfo).port;
+  });
+  afterAll(async () => { await new Promise((r) => server.close(r)); });
+  afterEach(() => jest.restoreAllMocks());
+
+  const post = (path: string, body: unknown, agent?: http.Agent) => {
+    const text = JSON.stringify(body);
+    return http.request({ host: '127.0.0.1', port, path, method: 'POST', agent, headers: { ...bearer(token), 'content-type': 'application/json', 'content-length': Buffer.byteLength(text) } }).end(text);
+  };
+
+  it('cancels its computation on the worker', async () => {
+    const run = jest.spyOn(t.ctx.compute, 'run');
+    const req = post('/api/v1/simulate', { moments: [6.5, 5, 2.5], axis: 'intermediate', rate: 400, misalignmentDeg: 1, seconds: 600, sampleRate: 1 });
+    req.on('error', () => undefined);
+    while (run.mock.calls.length === 0) await new Promise((r) => setTimeout(r, 20));
+    req.destroy();
+    await expect(run.mock.results[0].value).rejects.toMatchObject({ status: 499, code: 'cancelled' });
+  });
+
+  it('cancels nothing that was answered, however many requests one kept-alive connection carries', async () => {
+    const run = jest.spyOn(t.ctx.compute, 'run');
+    const warnings: string[] = [];
+    const onWarning = (w: Error) => warnings.push(w.name);
+    process.on('warning', onWarning);
+    const agent = new http.Agent({ keepAlive: true, maxSockets: 1 });
+    try {
+      for (let i = 0; i < 15; i++) {
+        const status = await new Promise<number>((resolve, reject) => {
+          post('/api/v1/analyze', racket, agent).on('response', (res) => { res.resume(); res.on('end', () => resolve(res.statusCode!)); }).on('error', reject);
+        });
+        expect(status).toBe(200);
+      }
+    } finally {
+      agent.destroy();
+    }
+    await new Promise((r) => setTimeout(r, 100));
+    process.off('warning', onWarning);
+    expect(run).toHaveBeenCalledTimes(15);
+    expect(run.mock.calls.map(([, signal]) => signal?.aborted)).toEqual(Array(15).fill(false));
+    expect(warnings).not.toContain('MaxListenersExceededWarning');
   });
 });

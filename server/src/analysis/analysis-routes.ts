@@ -29,26 +29,30 @@ export function analysisRoutes(ctx: AppContext): Router {
     method: 'post', path: '/analyze', summary: 'The spin report of a part document; nothing is saved.',
     access: { kind: 'user' }, body: partDocumentSchema, bodyValidatedBy: 'engine', query: workspaceQuery, errors: [404, 413, 422],
     success: { status: 200, description: 'The spin report (SI units).', schema: reportSchema },
-    handler: async ({ body, query, auth }, req) => ctx.compute.run<SpinReport>({
+    handler: async ({ body, query, auth }, _req, res) => ctx.compute.run<SpinReport>({
       kind: 'analyze', part: body, references: await referencesFor(auth!.user.id, query.workspace, body),
-    }, abortOnClose(req)),
+    }, abortOnClose(res)),
   });
 
   route({
     method: 'post', path: '/simulate', summary: 'Torque-free motion from the intended spin plus a misalignment: sampled ω, attitude quaternions, L, 2T, |L| and the polhode.',
     access: { kind: 'user' }, body: simulateInputSchema, bodyValidatedBy: 'engine', query: workspaceQuery, errors: [404, 413, 422],
     success: { status: 200, description: 'Samples of the motion.', schema: z.record(z.string(), z.unknown()) },
-    handler: async ({ body, query, auth }, req) => ctx.compute.run<SimulationResult>({
+    handler: async ({ body, query, auth }, _req, res) => ctx.compute.run<SimulationResult>({
       kind: 'simulate', input: body, references: await referencesFor(auth!.user.id, query.workspace, (body as { part?: unknown } | null)?.part),
-    }, abortOnClose(req)),
+    }, abortOnClose(res)),
   });
 
   return router;
 }
 
-/** Cancels the worker task when the client goes away. */
-function abortOnClose(req: express.Request): AbortSignal {
+/**
+ * Cancels the worker task when the client goes away before the answer is sent. Listens on the
+ * response, not the socket: a keep-alive socket carries many requests, and a listener per request
+ * on it would pile up until the connection closes.
+ */
+function abortOnClose(res: express.Response): AbortSignal {
   const controller = new AbortController();
-  req.socket.once('close', () => controller.abort());
+  res.once('close', () => { if (!res.writableFinished) controller.abort(); });
   return controller.signal;
 }
