@@ -1,8 +1,6 @@
-// Engine benchmarks: npm run bench. Prints a table and writes JSON to .data/bench/ (git-ignored).
+// Engine benchmarks (part of npm run bench). Prints a table and writes .data/bench/engine.json (git-ignored).
 // Benchmarks only — no test depends on timings. Each figure is measured in this one run.
 import RAPIER from '@dimforge/rapier3d-compat';
-import { mkdirSync, writeFileSync } from 'node:fs';
-import { join } from 'node:path';
 import { eigs } from 'mathjs';
 import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
 import {
@@ -22,13 +20,8 @@ import type { PartDocument } from '../src/schemas/part-document';
 import { binaryStl, toSoup, torusMesh } from '../src/engine/testing/tessellate';
 import { quatFromMat3 } from '../src/engine/linear/quaternion';
 import { rotationFromDegrees } from '../src/engine/linear/rotation-from-degrees';
-
-type Row = { name: string; value: number; unit: string; note?: string };
-const rows: Row[] = [];
-const record = (name: string, value: number, unit: string, note?: string) => {
-  rows.push({ name, value, unit, note });
-  console.log(`${name.padEnd(58)} ${value.toPrecision(4).padStart(10)} ${unit.padEnd(8)} ${note ?? ''}`);
-};
+import { partGenerator } from './bench-part';
+import { BenchTable } from './bench-table';
 
 /** Median time (µs) of `fn` over `runs` runs after `warm` warm-up runs. */
 function medianMicros(fn: () => void, runs: number, warm = Math.min(50, runs)): number {
@@ -41,20 +34,6 @@ function medianMicros(fn: () => void, runs: number, warm = Math.min(50, runs)): 
   }
   t.sort((x, y) => x - y);
   return t[Math.floor(t.length / 2)];
-}
-
-let seed = 20240601;
-const rnd = () => (seed = (Math.imul(seed, 1664525) + 1013904223) >>> 0) / 2 ** 32;
-
-/** An invented part of n boxes, cylinders and spheres, rotated and placed at random (seeded). */
-function randomPart(n: number): unknown {
-  const primitives = Array.from({ length: n }, (_, k) => {
-    const common = { id: `p${k}`, position: [rnd() - 0.5, rnd() - 0.5, 2 * rnd() - 1], rotationDeg: [360 * rnd() - 180, 180 * rnd() - 90, 360 * rnd() - 180], density: 300 + 3000 * rnd() };
-    if (k % 3 === 0) return { ...common, shape: 'box', size: [0.01 + 0.1 * rnd(), 0.01 + 0.1 * rnd(), 0.01 + 0.1 * rnd()] };
-    if (k % 3 === 1) return { ...common, shape: 'cylinder', radius: 0.005 + 0.05 * rnd(), length: 0.01 + 0.2 * rnd() };
-    return { ...common, shape: 'sphere', radius: 0.005 + 0.05 * rnd() };
-  });
-  return { name: `bench ${n}`, primitives, spin: { axis: [0, 0, 1], rate: 20 }, grip: { point: [0, 0, -1], axis: [0, 0, 1], faceNormal: [0, 1, 0] } };
 }
 
 function rapierMassProperties(world: RAPIER.World, doc: PartDocument): void {
@@ -73,10 +52,13 @@ function rapierMassProperties(world: RAPIER.World, doc: PartDocument): void {
   world.removeRigidBody(rb);
 }
 
-async function main(): Promise<void> {
+/** Runs the engine benchmarks; returns the path of the JSON written. */
+export async function runEngineBench(): Promise<string> {
+  const table = new BenchTable();
+  const record = table.record.bind(table);
+  const randomPart = partGenerator();
   await RAPIER.init();
   const world = new RAPIER.World({ x: 0, y: 0, z: 0 });
-  console.log(`Node ${process.version}, ${new Date().toISOString()}`);
 
   // 1. Parts of 10, 200 and 2000 primitives.
   for (const n of [10, 200, 2000]) {
@@ -154,14 +136,5 @@ async function main(): Promise<void> {
   const scatterMs = Number(process.hrtime.bigint() - t0) / 1e6;
   record('scatter study 10,000 samples × 50 primitives', scatterMs, 'ms', `one run; ${study.sensitivities.length} sensitivities`);
 
-  const out = join(process.cwd(), '.data', 'bench');
-  mkdirSync(out, { recursive: true });
-  const file = join(out, 'engine.json');
-  writeFileSync(file, JSON.stringify({ node: process.version, date: new Date().toISOString(), rows, sink }, null, 2));
-  console.log(`\nwritten ${file}`);
+  return table.write('engine', { sink });
 }
-
-main().catch((e) => {
-  console.error(e);
-  process.exitCode = 1;
-});
