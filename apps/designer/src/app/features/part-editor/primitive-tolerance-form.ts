@@ -61,7 +61,7 @@ import { densityDefaultHint, hasSizeTolerance, toleranceToForm, withTolerance } 
       gap: 8px;
     }
     .tw-number {
-      width: 15rem;
+      width: 19rem;
     }
   `,
 })
