@@ -6,6 +6,7 @@ import * as projects from './migrations/20261201-0003-projects';
 import * as rateLimits from './migrations/20261201-0004-rate-limits';
 import * as designWorkspace from './migrations/20261201-0005-design-workspace';
 import * as billing from './migrations/20261201-0006-billing';
+import * as measurementImports from './migrations/20261201-0007-measurement-imports';
 
 /** Migrations in the order they run. Migrations are history: never edit one that landed, add one. */
 const MIGRATIONS = [
@@ -15,6 +16,7 @@ const MIGRATIONS = [
   { name: '20261201-0004-rate-limits', module: rateLimits },
   { name: '20261201-0005-design-workspace', module: designWorkspace },
   { name: '20261201-0006-billing', module: billing },
+  { name: '20261201-0007-measurement-imports', module: measurementImports },
 ];
 
 export interface Migration {

@@ -1,6 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ConnectionError, ConnectionRefusedError, ConnectionAcquireTimeoutError, ConnectionTimedOutError, HostNotReachableError } from 'sequelize';
 import type { Logger } from 'pino';
+import type { ErrorBody } from '@tumblewise/shared';
 import { AppError } from './app-error';
 
 /** Errors from body parsing, multer and the database, mapped to our statuses. */
@@ -21,15 +22,16 @@ function toAppError(err: unknown): AppError {
   return new AppError(500, 'internal', 'Something went wrong on our side. It has been logged.');
 }
 
-/** The one error handler: JSON body `{ error: { code, message, field? } }`, no stack traces. */
+/** The one error handler: JSON body `{ error: { code, message, field?, problems? } }`, no stack traces. */
 export function errorHandler(logger: Logger): ErrorRequestHandler {
   return (err, req, res, _next) => {
     const appError = toAppError(err);
     if (appError.status >= 500) logger.error({ err, method: req.method, url: req.originalUrl }, 'request failed');
     if (res.headersSent) return;
     if (appError.headers) res.set(appError.headers);
-    const body: { code: string; message: string; field?: string } = { code: appError.code, message: appError.message };
+    const body: ErrorBody['error'] = { code: appError.code, message: appError.message };
     if (appError.field) body.field = appError.field;
+    if (appError.problems?.length) body.problems = appError.problems.map(({ line, message }) => ({ line, message }));
     res.status(appError.status).json({ error: body });
   };
 }

@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { PERMISSIONS, ROLES, can, type Role } from '@tumblewise/shared';
-import { Invitation, Material, Membership, Mesh, Part, Project, ScatterStudy, User, Variant } from '../models/init-models';
+import { Invitation, Material, Measurement, Membership, Mesh, Part, Project, ScatterStudy, User, Variant } from '../models/init-models';
 import { bearer, signUp, startTestApp, type TestApp } from '../test-support/test-app';
 
 /**
@@ -11,7 +11,7 @@ const NOWHERE = '00000000-0000-4000-8000-000000000000';
 let t: TestApp;
 type Actor = { token: string; workspaceId: string };
 const tokens: Partial<Record<Role, Actor>> = {};
-let other: Record<'workspaceId' | 'memberId' | 'invitationId' | 'materialId' | 'projectId' | 'partId' | 'variantId' | 'meshId' | 'studyId', string>;
+let other: Record<'workspaceId' | 'memberId' | 'invitationId' | 'materialId' | 'projectId' | 'partId' | 'variantId' | 'meshId' | 'studyId' | 'measurementId' | 'importId', string>;
 
 /** A valid body for each write route, so the tenancy checks reach the row lookup. */
 const VALID_BODIES: Record<string, object> = {
@@ -34,7 +34,7 @@ const VALID_BODIES: Record<string, object> = {
 /** Ids that exist nowhere: an allowed role reaches the lookup (404) or validation (400). */
 const NOWHERE_IDS = (workspaceId: string) => ({
   workspaceId, memberId: NOWHERE, invitationId: NOWHERE, materialId: NOWHERE, projectId: NOWHERE, partId: NOWHERE, variantId: NOWHERE,
-  meshId: NOWHERE, studyId: NOWHERE,
+  meshId: NOWHERE, studyId: NOWHERE, measurementId: NOWHERE, importId: NOWHERE,
 });
 
 beforeAll(async () => {
@@ -57,9 +57,11 @@ beforeAll(async () => {
   const variant = await Variant.create({ workspaceId: b.workspace.id, partId: part.id, number: 1, document: {}, report: {}, engineVersion: 'test', authorId: b.user.id });
   const mesh = await Mesh.create({ workspaceId: b.workspace.id, name: 'B mesh', sha256: 'x'.repeat(64), byteSize: 1, triangleCount: 1, format: 'binary', data: Buffer.from([0]), report: { fixed: [], warnings: [] }, createdById: b.user.id });
   const study = await ScatterStudy.create({ workspaceId: b.workspace.id, variantId: variant.id, document: {}, samples: 10, seed: 1, createdById: b.user.id });
+  const reading = await Measurement.create({ workspaceId: b.workspace.id, variantId: variant.id, axis: 'major', value: 0.01, enteredValue: 0.01, enteredUnit: 'kg·m²', method: 'test', createdById: b.user.id, importId: '00000000-0000-4000-8000-0000000000b1' });
   other = {
     workspaceId: b.workspace.id, memberId: bMember!.id, invitationId: inv.body.id, materialId: material.id,
     projectId: project.id, partId: part.id, variantId: variant.id, meshId: mesh.id, studyId: study.id,
+    measurementId: reading.id, importId: reading.importId!,
   };
   expect(await Invitation.count({ where: { id: other.invitationId } })).toBe(1);
 });
@@ -137,6 +139,7 @@ describe('tenancy matrix', () => {
     expect((await Material.findByPk(other.materialId))!.name).toBe('B wood');
     expect(await Mesh.count({ where: { id: other.meshId } })).toBe(1);
     expect((await ScatterStudy.findByPk(other.studyId))!.state).toBe('queued');
+    expect(await Measurement.count({ where: { id: other.measurementId, importId: other.importId } })).toBe(1);
   });
 
   it('treats ids of another workspace inside a body or query as missing', async () => {

@@ -11,6 +11,8 @@ export class Measurement extends Model<InferAttributes<Measurement>, InferCreati
   declare enteredUnit: string;
   declare method: string;
   declare createdById: string | null;
+  /** The import the row came in with (rows of one CSV share it); null for rows from before imports were recorded. */
+  declare importId: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize): void {
@@ -24,6 +26,7 @@ export class Measurement extends Model<InferAttributes<Measurement>, InferCreati
       enteredUnit: { type: DataTypes.STRING(20), allowNull: false },
       method: { type: DataTypes.STRING(200), allowNull: false },
       createdById: { type: DataTypes.UUID, allowNull: true },
+      importId: { type: DataTypes.UUID, allowNull: true },
       createdAt: DataTypes.DATE,
     }, { sequelize, tableName: 'measurements', updatedAt: false });
   }

@@ -11,9 +11,14 @@ export const measurementSchema = z.object({
   method: z.string(),
   predicted: z.number().nullable().describe('the variant’s predicted moment about that axis (kg·m²), when the axis is recognised'),
   differencePercent: z.number().nullable(),
+  importId: idSchema.nullable().describe('the CSV import the row came in with (rows of one file share it); null for rows recorded before imports were tracked'),
   createdAt: timestampSchema,
 });
 export type Measurement = z.infer<typeof measurementSchema>;
+
+/** What a removal of measured rows answers: how many rows went. */
+export const measurementsRemovedSchema = z.object({ removed: z.number().int().describe('rows removed') });
+export type MeasurementsRemoved = z.infer<typeof measurementsRemovedSchema>;
 
 /** CSV columns of a measured-data upload, in this order (header row required). */
 export const MEASUREMENT_CSV_COLUMNS = ['axis', 'value', 'unit', 'method'] as const;

@@ -1,5 +1,5 @@
 import { HttpErrorResponse } from '@angular/common/http';
-import { isErrorBody } from '@tumblewise/shared';
+import { isErrorBody, type ErrorProblem } from '@tumblewise/shared';
 
 /** A failed API call, as every screen sees it: status, machine code, readable message, and the field at fault. */
 export class ApiError extends Error {
@@ -13,20 +13,22 @@ export class ApiError extends Error {
     readonly field?: string,
     /** Seconds to wait before trying again (429 responses). */
     readonly retryAfterSeconds?: number,
+    /** Every problem the server found in an uploaded file, by line (null: the file as a whole); empty for other errors. */
+    readonly problems: readonly ErrorProblem[] = [],
   ) {
     super(message);
     this.name = 'ApiError';
   }
 
-  /** Builds an ApiError from an HttpClient failure, reading the `{ error: { code, message, field } }` body. */
+  /** Builds an ApiError from an HttpClient failure, reading the `{ error: { code, message, field, problems } }` body. */
   static fromHttpError(response: HttpErrorResponse): ApiError {
     if (response.status === 0) {
       return new ApiError(0, 'network', 'The server could not be reached. Check your connection and try again.');
     }
     const retryAfterSeconds = parseRetryAfter(response.headers?.get('Retry-After'));
     if (isErrorBody(response.error)) {
-      const { code, message, field } = response.error.error;
-      return new ApiError(response.status, code, withRetryHint(message, response.status, retryAfterSeconds), field, retryAfterSeconds);
+      const { code, message, field, problems } = response.error.error;
+      return new ApiError(response.status, code, withRetryHint(message, response.status, retryAfterSeconds), field, retryAfterSeconds, problems ?? []);
     }
     return new ApiError(
       response.status,

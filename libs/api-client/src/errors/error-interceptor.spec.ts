@@ -36,6 +36,25 @@ describe('errorInterceptor', () => {
     expect(error).toMatchObject({ status: 409, code: 'email_taken', field: 'email', message: 'An account with this e-mail already exists.' });
   });
 
+  it('carries the problems of a refused file, each with its line', () => {
+    const problems = [{ line: 3, message: 'value "-3" must be a positive number' }, { line: null, message: 'the file has 2 more problems' }];
+    const error = failureOf('/api/v1/workspaces/w/variants/v/measurements', (call) =>
+      call.flush({ error: { code: 'invalid_input', message: 'The CSV was not imported: line 3: value "-3" must be a positive number.', field: 'file', problems } }, { status: 400, statusText: 'Bad Request' }),
+    );
+    expect(error).toMatchObject({ status: 400, code: 'invalid_input', field: 'file', problems });
+  });
+
+  it('has no problems for an error that lists none, or whose list is malformed', () => {
+    const plain = failureOf('/api/v1/auth/signup', (call) =>
+      call.flush({ error: { code: 'email_taken', message: 'Taken.', field: 'email' } }, { status: 409, statusText: 'Conflict' }),
+    );
+    expect(plain.problems).toEqual([]);
+    const malformed = failureOf('/api/v1/me', (call) =>
+      call.flush({ error: { code: 'invalid_input', message: 'Bad.', problems: 'line 2: x' } }, { status: 400, statusText: 'Bad Request' }),
+    );
+    expect(malformed).toMatchObject({ code: 'bad_request', problems: [] });
+  });
+
   it('keeps the last-owner refusal readable', () => {
     const error = failureOf('/api/v1/workspaces/w/members/m', (call) =>
       call.flush({ error: { code: 'last_owner', message: 'A workspace needs at least one owner.' } }, { status: 409, statusText: 'Conflict' }),

@@ -1,15 +1,16 @@
 import { NgTemplateOutlet } from '@angular/common';
-import { ChangeDetectionStrategy, Component, computed, DestroyRef, effect, inject, input, signal, untracked } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, DestroyRef, effect, type ElementRef, inject, input, signal, untracked, viewChild } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
-import { MatButton } from '@angular/material/button';
+import { MatButton, MatIconButton } from '@angular/material/button';
 import { MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
+import { MatTooltip } from '@angular/material/tooltip';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
-import { csvProblemsOf, MeasurementsApi, PartsApi, ProjectsApi, saveBlob, SettingsApi, toApiError, VariantsApi, WorkspaceContext, type CsvProblem } from '@tumblewise/api-client';
-import type { Measurement, Variant } from '@tumblewise/shared';
-import { EmptyState, ErrorBanner, LoadingState, PageHeader, StatusChip } from '@tumblewise/ui';
-import type { Subscription } from 'rxjs';
+import { MeasurementsApi, PartsApi, ProjectsApi, saveBlob, SettingsApi, toApiError, VariantsApi, WorkspaceContext } from '@tumblewise/api-client';
+import type { ErrorProblem, Measurement, MeasurementsRemoved, Variant } from '@tumblewise/shared';
+import { Confirmation, type ConfirmRequest, EmptyState, ErrorBanner, LoadingState, PageHeader, StatusChip } from '@tumblewise/ui';
+import { filter, type Observable, type Subscription, switchMap } from 'rxjs';
 import {
   comparedWith,
   DIFFERENCE_FLAG_PERCENT,
@@ -41,7 +42,7 @@ const FALLBACK_UNIT: InertiaUnit = 'g·cm²';
 @Component({
   selector: 'tw-measured-data',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [NgTemplateOutlet, RouterLink, MatButton, MatFormField, MatLabel, MatInput, MatProgressBar, PageHeader, StatusChip, EmptyState, ErrorBanner, LoadingState],
+  imports: [NgTemplateOutlet, RouterLink, MatButton, MatIconButton, MatTooltip, MatFormField, MatLabel, MatInput, MatProgressBar, PageHeader, StatusChip, EmptyState, ErrorBanner, LoadingState],
   templateUrl: './measured-data.html',
   styleUrl: './measured-data.scss',
 })
@@ -61,6 +62,7 @@ export class MeasuredData {
   private readonly measurementsApi = inject(MeasurementsApi);
   private readonly router = inject(Router);
   private readonly route = inject(ActivatedRoute);
+  private readonly confirmation = inject(Confirmation);
 
   protected readonly threshold = DIFFERENCE_FLAG_PERCENT;
   protected readonly example = EXAMPLE_CSV;
@@ -127,13 +129,23 @@ export class MeasuredData {
   protected readonly importing = signal(false);
   /** Share of the file sent (0…1), null while unknown. */
   protected readonly progress = signal<number | null>(null);
-  protected readonly problems = signal<CsvProblem[]>([]);
+  protected readonly problems = signal<readonly ErrorProblem[]>([]);
   protected readonly importFailure = signal<string | null>(null);
-  protected readonly imported = signal<{ count: number; file: string } | null>(null);
+  /** The last import: how many rows, from which file, and its id (to undo it). */
+  protected readonly imported = signal<{ count: number; file: string; importId: string | null } | null>(null);
   protected readonly dragging = signal(false);
   /** Ids of the rows the last import added (marked in the table). */
   private readonly freshIds = signal<ReadonlySet<string>>(new Set());
   private upload: Subscription | null = null;
+
+  // Removal state.
+  /** What is being removed: a row id, or `import` while an import is undone. */
+  protected readonly removing = signal<string | null>(null);
+  /** What the last removal did, for the status line. */
+  protected readonly removedNote = signal<string | null>(null);
+  protected readonly removeFailure = signal<string | null>(null);
+  private removal: Subscription | null = null;
+  private readonly readingsHeading = viewChild<ElementRef<HTMLElement>>('readingsHeading');
 
   constructor() {
     // Without ?variant= the newest is shown; write it into the address so the link can be shared.
@@ -141,7 +153,7 @@ export class MeasuredData {
       const chosen = this.chosen();
       if (chosen && !this.variant()) untracked(() => this.writeAddress(chosen.id));
     });
-    inject(DestroyRef).onDestroy(() => this.upload?.unsubscribe());
+    inject(DestroyRef).onDestroy(() => { this.upload?.unsubscribe(); this.removal?.unsubscribe(); });
   }
 
   /** The picker changed: show that variant's readings. */
@@ -206,15 +218,14 @@ export class MeasuredData {
           return;
         }
         this.importing.set(false);
-        this.imported.set({ count: step.rows.length, file: file.name });
+        this.imported.set({ count: step.rows.length, file: file.name, importId: step.rows[0]?.importId ?? null });
         this.freshIds.set(new Set(step.rows.map((r) => r.id)));
         this.measurements.reload();
       },
       error: (error: unknown) => {
         this.importing.set(false);
         const fault = toApiError(error);
-        const problems = csvProblemsOf(fault);
-        if (problems.length) this.problems.set(problems);
+        if (fault.problems.length) this.problems.set(fault.problems);
         else this.importFailure.set(`“${file.name}” was not imported: ${fault.message}`);
       },
     });
@@ -235,10 +246,88 @@ export class MeasuredData {
     this.settings.reload();
   }
 
+  /** Removes one reading, after the user confirms. */
+  protected removeReading(row: Measurement): void {
+    const what = `${row.axis}, ${formatEntered(row.enteredValue, row.enteredUnit)}`;
+    this.removeAfterConfirming(
+      {
+        title: 'Remove this reading?',
+        message: `The reading “${what}” (${row.method}, recorded ${formatRecorded(row.createdAt)}) is removed from this variant. This cannot be undone here; the audit log keeps its values.`,
+        confirmLabel: 'Remove reading',
+        destructive: true,
+      },
+      row.id,
+      (workspaceId, variantId) => this.measurementsApi.remove(workspaceId, variantId, row.id),
+      () => `Removed the reading “${what}”.`,
+    );
+  }
+
+  /** Removes every row the last import brought in (those not removed already), after the user confirms. */
+  protected undoImport(): void {
+    const done = this.imported();
+    if (!done?.importId) return;
+    const importId = done.importId;
+    const left = this.rows().filter((r) => r.importId === importId).length;
+    this.removeAfterConfirming(
+      {
+        title: `Undo the import of ${done.file}?`,
+        message: `The ${left === 1 ? 'reading' : `${left} readings`} it brought in ${left === 1 ? 'is' : 'are'} removed from this variant; other readings stay. This cannot be undone here; the audit log keeps their values.`,
+        confirmLabel: left === 1 ? 'Remove 1 reading' : `Remove ${left} readings`,
+        destructive: true,
+      },
+      'import',
+      (workspaceId, variantId) => this.measurementsApi.removeImport(workspaceId, variantId, importId),
+      (removed) => `Undid the import of ${done.file}: removed ${removed === 1 ? '1 reading' : `${removed} readings`}.`,
+      () => this.imported.set(null),
+    );
+  }
+
+  /** Confirm → remove → reload the table and say what went; a failure shows in a banner above the table. */
+  private removeAfterConfirming(
+    request: ConfirmRequest,
+    busy: string,
+    remove: (workspaceId: string, variantId: string) => Observable<MeasurementsRemoved>,
+    note: (removed: number) => string,
+    afterwards?: () => void,
+  ): void {
+    const workspaceId = this.workspace.workspaceId();
+    const variant = this.chosen();
+    if (!workspaceId || !variant || this.removing() || !this.mayImport()) return;
+    this.removeFailure.set(null);
+    this.removedNote.set(null);
+    this.removal = this.confirmation
+      .ask(request)
+      .pipe(
+        filter(Boolean),
+        switchMap(() => {
+          this.removing.set(busy);
+          return remove(workspaceId, variant.id);
+        }),
+      )
+      .subscribe({
+        next: ({ removed }) => {
+          this.removing.set(null);
+          this.removedNote.set(note(removed));
+          afterwards?.();
+          this.measurements.reload();
+          // The button pressed is gone with its row: keep the keyboard in the table's section.
+          this.readingsHeading()?.nativeElement.focus();
+        },
+        error: (error: unknown) => {
+          this.removing.set(null);
+          const fault = toApiError(error);
+          this.removeFailure.set(fault.status === 404 ? 'Those readings were already removed; the table shows what is left.' : `Nothing was removed: ${fault.message}`);
+          if (fault.status === 404) this.measurements.reload();
+        },
+      });
+  }
+
   private clearImportMessages(): void {
     this.problems.set([]);
     this.importFailure.set(null);
     this.imported.set(null);
+    this.removedNote.set(null);
+    this.removeFailure.set(null);
   }
 
   private writeAddress(variantId: string): void {
