@@ -18,8 +18,11 @@ export class SimulationApi {
   private readonly http = inject(HttpClient);
   private readonly base = inject(API_BASE_URL);
 
-  /** Samples ω, attitude, angular momentum and polhode from the part's intended spin plus a misalignment. */
-  simulate(body: SimulateBody): Observable<SimulationResult> {
-    return this.http.post<SimulationResult>(`${this.base}/simulate`, body);
+  /**
+   * Samples ω, attitude, angular momentum and polhode from the part's intended spin plus a
+   * misalignment; `workspaceId` resolves the document's materialId and meshId references there.
+   */
+  simulate(body: SimulateBody, workspaceId?: string | null): Observable<SimulationResult> {
+    return this.http.post<SimulationResult>(`${this.base}/simulate`, body, workspaceId ? { params: { workspace: workspaceId } } : {});
   }
 }

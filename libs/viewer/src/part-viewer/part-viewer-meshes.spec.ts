@@ -1,5 +1,5 @@
 import { provideHttpClient } from '@angular/common/http';
-import { provideHttpClientTesting } from '@angular/common/http/testing';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { MATERIAL_ANIMATIONS } from '@angular/material/core';
 import { analyzeValidatedPart, simulate } from '@tumblewise/engine';
@@ -39,7 +39,7 @@ describe('TwPartViewer with uploaded meshes', () => {
   });
   afterEach(() => delete (globalThis as { ResizeObserver?: unknown }).ResizeObserver);
 
-  async function open(source: ((id: string) => Promise<Float32Array>) | null) {
+  async function open(source: ((id: string) => Promise<Float32Array>) | null, motion: { given: boolean; workspaceId?: string } = { given: true }) {
     TestBed.configureTestingModule({
       imports: [TwPartViewer],
       providers: [
@@ -55,8 +55,13 @@ describe('TwPartViewer with uploaded meshes', () => {
     fixture.componentInstance.uploadedMeshes.subscribe((s) => statuses.push(s));
     fixture.componentRef.setInput('document', DOC);
     fixture.componentRef.setInput('report', REPORT);
-    fixture.componentRef.setInput('simulation', SIMULATION);
-    await fixture.whenStable();
+    fixture.componentRef.setInput('simulation', motion.given ? SIMULATION : null);
+    if (motion.workspaceId) fixture.componentRef.setInput('workspaceId', motion.workspaceId);
+    if (motion.given) await fixture.whenStable();
+    else for (let i = 0; i < 3; i++) {
+      await new Promise((r) => setTimeout(r, 0));
+      fixture.detectChanges();
+    }
     return { fixture, statuses, host: fixture.nativeElement as HTMLElement };
   }
 
@@ -91,6 +96,21 @@ describe('TwPartViewer with uploaded meshes', () => {
   it('without a source lists the mesh as not drawn', async () => {
     const { fixture, host } = await open(null);
     expect(host.getAttribute('data-meshes-failed')).toBe('1');
+    fixture.destroy();
+  });
+
+  it('draws an arrived mesh before the motion is in, and asks for the motion in the workspace', async () => {
+    const { fixture, host } = await open(async () => positions, { given: false, workspaceId: 'ws-9' });
+    const backend = TestBed.inject(HttpTestingController);
+    const call = backend.expectOne((r) => r.url === '/api/v1/simulate');
+    expect(call.request.params.get('workspace')).toBe('ws-9');
+    await new Promise((r) => setTimeout(r, 20));
+    fixture.detectChanges();
+    expect(host.getAttribute('data-meshes-drawn')).toBe('1');
+    // A frame was drawn with the mesh in it although there is no motion yet.
+    await new Promise((r) => requestAnimationFrame(() => r(null)));
+    expect(scenes.some((s) => s.getObjectByName('add:scan'))).toBe(true);
+    call.flush(SIMULATION);
     fixture.destroy();
   });
 });

@@ -96,6 +96,8 @@ export class TwPartViewer {
   readonly report = input.required<SpinReport>();
   /** A simulation already at hand for the document's own misalignment; fetched when absent or when the misalignment changes. */
   readonly simulation = input<SimulationResult | null>(null);
+  /** The workspace whose uploaded meshes and materials the document refers to (sent with the motion request). */
+  readonly workspaceId = input<string | null>(null);
   /** Where the uploaded meshes of the picture stand, after each drawing (drawn, loading, failed with the reason). */
   readonly uploadedMeshes = output<UploadedMeshStatus>();
 
@@ -129,10 +131,10 @@ export class TwPartViewer {
   protected readonly webglError = signal<string | null>(null);
 
   private readonly motion = rxResource({
-    params: () => ({ document: this.document(), report: this.report(), misalignmentDeg: this.misalignment(), given: this.simulation() }),
+    params: () => ({ document: this.document(), report: this.report(), misalignmentDeg: this.misalignment(), given: this.simulation(), workspaceId: this.workspaceId() }),
     stream: ({ params }) => {
       if (params.given && params.misalignmentDeg === (params.document.spin.misalignmentDeg ?? 1)) return of(params.given);
-      return timer(this.requestDelay).pipe(switchMap(() => this.simulationApi.simulate(tumbleRequest(params.document, params.report, params.misalignmentDeg))));
+      return timer(this.requestDelay).pipe(switchMap(() => this.simulationApi.simulate(tumbleRequest(params.document, params.report, params.misalignmentDeg), params.workspaceId)));
     },
   });
   protected readonly track = computed(() => (this.motion.hasValue() ? this.motion.value() : null));
@@ -311,6 +313,8 @@ export class TwPartViewer {
     if (previousReach === null || Math.abs(reach - previousReach) > 0.2 * previousReach) stage.frameSphere(reach * 1.5);
     this.showMomentum(this.track());
     this.applyTime();
+    // Without a motion yet applyTime draws nothing: the new picture still has to show.
+    stage.requestRender();
   }
 
   /** Draws the current document again (an uploaded mesh arrived or failed). */

@@ -30,7 +30,7 @@ function workspaceMeshSource(): MeshGeometrySource {
     <section class="tw-viewer-slot" aria-label="3-D view" data-testid="viewer-slot">
       @defer (on viewport) {
         @if (document() && report()) {
-          <tw-part-viewer [document]="document()!" [report]="report()!" (uploadedMeshes)="meshes.set($event)" />
+          <tw-part-viewer [document]="document()!" [report]="report()!" [workspaceId]="workspaceId()" (uploadedMeshes)="meshes.set($event)" />
           @for (f of meshes().failed; track f.id) {
             <p class="tw-mesh-note" role="status" data-testid="viewer-mesh-note">
               The uploaded mesh “{{ f.id }}” is not drawn ({{ f.message }}); the spin report still counts it.
@@ -80,6 +80,8 @@ export class ViewerSlot {
   readonly document = input<PartDocument | null>(null);
   /** Its spin report, or null. */
   readonly report = input<SpinReport | null>(null);
+  /** The current workspace: the viewer's motion request resolves the document's mesh references there. */
+  protected readonly workspaceId = inject(WorkspaceContext).workspaceId;
   /** Where the viewer's uploaded meshes stand (a note for each that could not be drawn). */
   protected readonly meshes = signal<UploadedMeshStatus>({ drawn: [], pending: [], failed: [] });
 }
