@@ -7,7 +7,8 @@ import { accessibilityViolations, baseUrl, openBrowser, screenshot } from '../su
  * "Measured data" link, picks the variant whose prototype the demo seed measured and sees those
  * rig readings against the prediction; downloads the template; imports a CSV with bad rows (the
  * problems listed by line, nothing imported) and then a good one (the new rows with their
- * predicted moments and differences). Every state is screenshotted and checked with axe.
+ * predicted moments and differences); undoes that import and removes one seeded reading, each
+ * after a confirmation. Every state is screenshotted and checked with axe.
  */
 const DEMO_PASSWORD = 'kestrel-demo-2026';
 const DESIGNER = 'designer@kestrelbay.test';
@@ -18,6 +19,13 @@ const rows = (page: Page) => byTestId(page, 'measurement-row');
 async function expectAccessible(page: Page, screen: string): Promise<void> {
   await screenshot(page, screen);
   expect({ screen, violations: await accessibilityViolations(page) }).toEqual({ screen, violations: [] });
+}
+
+/** Waits until the confirmation dialog has finished opening (no transition left), so its screenshot is the settled dialog. */
+async function dialogOpen(page: Page): Promise<void> {
+  await byTestId(page, 'confirm-accept').waitFor();
+  await page.locator('mat-dialog-container').evaluate((el) => Promise.all(el.getAnimations({ subtree: true }).map((a) => a.finished)));
+  await page.waitForFunction(() => !document.querySelector('.mdc-dialog--opening'));
 }
 
 async function api<T>(path: string, token: string): Promise<T> {
@@ -32,7 +40,7 @@ let browser: Awaited<ReturnType<typeof openBrowser>>;
 beforeAll(async () => { browser = await openBrowser(); });
 afterAll(async () => { await browser?.close(); });
 
-it('shows the seeded rig readings against the prediction, refuses a bad CSV by line and imports a good one', async () => {
+it('shows the seeded rig readings against the prediction, refuses a bad CSV by line, imports a good one, undoes it and removes a reading', async () => {
   const { page } = browser;
 
   // The seeded variants of the racket frame, read through the API to know what to expect.
@@ -116,6 +124,36 @@ it('shows the seeded rig readings against the prediction, refuses a bad CSV by l
   const other = page.locator('[data-testid="measurement-row"][data-axis="end-over-end (rig C)"]');
   await expect(other.locator('[data-testid="measurement-difference"]').innerText()).resolves.toContain('no prediction for this axis');
   await expectAccessible(page, 'measured-data-4-imported');
+
+  // That import was a mistake: undo it. The confirmation says how many readings go; then only the
+  // seeded readings are left, on screen and on the server.
+  await byTestId(page, 'measurements-undo-import').click();
+  await dialogOpen(page);
+  await expect(page.locator('mat-dialog-container').innerText()).resolves.toContain('The 3 readings it brought in are removed');
+  await expectAccessible(page, 'measured-data-5-confirm-undo');
+  await byTestId(page, 'confirm-accept').click();
+  await byTestId(page, 'measurements-removed').filter({ hasText: 'Undid the import of frame-rig-c.csv: removed 3 readings.' }).waitFor();
+  await page.locator('[data-testid="measurement-row"][data-fresh="true"]').first().waitFor({ state: 'detached' });
+  await expect(rows(page).count()).resolves.toBe(seeded.length);
+  await expect(byTestId(page, 'measurements-undo-import').count()).resolves.toBe(0);
+  await expect(api<unknown[]>(`/workspaces/${ws}/variants/${measured.id}/measurements`, session.accessToken).then((r) => r.length)).resolves.toBe(seeded.length);
+  await expectAccessible(page, 'measured-data-6-import-undone');
+
+  // Remove one seeded reading with its row's button (named after the reading), after confirming.
+  const removeSwing = swing.locator('[data-testid="measurement-remove"]');
+  await expect(removeSwing.getAttribute('aria-label')).resolves.toMatch(/^Remove the reading swing, /);
+  await removeSwing.click();
+  await dialogOpen(page);
+  await expect(page.locator('mat-dialog-container').innerText()).resolves.toContain('Remove this reading?');
+  await byTestId(page, 'confirm-accept').click();
+  await byTestId(page, 'measurements-removed').filter({ hasText: 'Removed the reading “swing, ' }).waitFor();
+  await swing.waitFor({ state: 'detached' });
+  await expect(rows(page).count()).resolves.toBe(seeded.length - 1);
+  await expect(major.count()).resolves.toBe(1);
+  const left = await api<{ axis: string }[]>(`/workspaces/${ws}/variants/${measured.id}/measurements`, session.accessToken);
+  expect(left.map((m) => m.axis)).not.toContain('swing');
+  expect(left).toHaveLength(seeded.length - 1);
+  await expectAccessible(page, 'measured-data-7-row-removed');
 
   // The template, made in the browser, starts with the header the server asks for.
   const [download] = await Promise.all([page.waitForEvent('download'), byTestId(page, 'measurements-template').click()]);
