@@ -36,6 +36,7 @@ export const ACTION_LABELS: Record<(typeof AUDIT_ACTIONS)[number], string> & Rec
   'review.commented': 'Sign-off comment',
   'mesh.uploaded': 'Mesh uploaded',
   'measurements.imported': 'Measurements imported',
+  'measurements.removed': 'Measurements removed',
   'project.archived': 'Project archived',
   'project.restored': 'Project restored',
 };
