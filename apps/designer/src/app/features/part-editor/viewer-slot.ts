@@ -2,7 +2,10 @@ import { ChangeDetectionStrategy, Component, inject, input, signal } from '@angu
 import { MeshesApi, WorkspaceContext } from '@tumblewise/api-client';
 import type { SpinReport } from '@tumblewise/engine';
 import type { PartDocument } from '@tumblewise/shared';
-import { MESH_GEOMETRY_SOURCE, TwPartViewer, type MeshGeometrySource, type UploadedMeshStatus } from '@tumblewise/viewer';
+// The viewer (and three.js) load in the @defer block: keep its import on its own line, so the
+// compiler can make it lazy; the token and types below come without three.js.
+import { TwPartViewer } from '@tumblewise/viewer';
+import { MESH_GEOMETRY_SOURCE, type MeshGeometrySource, type UploadedMeshStatus } from '@tumblewise/viewer';
 import { firstValueFrom } from 'rxjs';
 
 /** The viewer's uploaded meshes come from the current workspace's stored STL files. */
