@@ -135,7 +135,7 @@ it('refuses an open STL with the reason at the field, then analyses and draws a 
 
   // An open mesh: refused, the reason at the field, nothing selected.
   // Before any file the field asks for a mesh; after the upload it says why the file was refused.
-  await expect(byTestId(page, 'mesh-error').innerText()).resolves.toMatch(/Mesh is required/);
+  await expect(byTestId(page, 'mesh-error').innerText()).resolves.toMatch(/Choose an uploaded mesh or upload an STL file/);
   await uploadThroughChooser(page, openFile);
   await byTestId(page, 'mesh-error').filter({ hasText: 'The STL cannot be used' }).waitFor();
   await expect(byTestId(page, 'mesh-error').innerText()).resolves.toMatch(/The STL cannot be used: .*not closed/);

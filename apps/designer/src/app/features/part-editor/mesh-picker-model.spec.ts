@@ -1,4 +1,4 @@
-import { fileProblem, formatBytes, meshOptionLabel, triangleText, uploadFailureMessage, uploadName, uploadProgressView } from './mesh-picker-model';
+import { fileProblem, meshReferenceProblem, formatBytes, meshOptionLabel, triangleText, uploadFailureMessage, uploadName, uploadProgressView } from './mesh-picker-model';
 
 describe('the mesh picker model', () => {
   it('writes file sizes with decimal prefixes (IEC 80000-13: 1 kB = 1000 B, 1 MB = 10⁶ B)', () => {
@@ -39,5 +39,11 @@ describe('the mesh picker model', () => {
     expect(uploadName('club-head v2.stl')).toBe('club-head v2');
     expect(uploadName('.stl')).toBe('.stl');
     expect(uploadName(`${'x'.repeat(300)}.stl`)).toHaveLength(200);
+  });
+
+  it('words a missing or unknown mesh reference for the picker', () => {
+    expect(meshReferenceProblem('is required (or give inline vertices and triangles)')).toBe('Choose an uploaded mesh or upload an STL file.');
+    expect(meshReferenceProblem('is not a known mesh (m-9)')).toBe('Mesh is not a known mesh (m-9)');
+    expect(meshReferenceProblem(null)).toBeNull();
   });
 });

@@ -59,3 +59,13 @@ export function uploadName(fileName: string): string {
   const base = fileName.replace(/\.stl$/i, '').trim();
   return (base || fileName).slice(0, 200);
 }
+
+/**
+ * A document problem with a mesh primitive's `meshId`, worded for the picker: a missing reference
+ * asks for a choice or an upload (inline triangles come only from an imported file).
+ */
+export function meshReferenceProblem(message: string | null): string | null {
+  if (!message) return null;
+  if (/^is required/.test(message)) return 'Choose an uploaded mesh or upload an STL file.';
+  return `Mesh ${message}`;
+}

@@ -9,6 +9,7 @@ import { FieldErrorPipe } from '@tumblewise/ui';
 import type { Subscription } from 'rxjs';
 import { issueAt, type FieldIssues } from './document-issues';
 import { MeshPicker } from './mesh-picker';
+import { meshReferenceProblem } from './mesh-picker-model';
 import type { DraftPrimitive } from './draft-document';
 import { SHAPE_FIELDS, shapeLabel, type DimensionField } from './primitive-fields';
 import { formValueToPrimitive, numericControls, primitiveToFormValue, type NumericControl, type PrimitiveFormValue } from './primitive-form-model';
@@ -63,8 +64,7 @@ export class PrimitiveForm {
   });
   /** A problem with the mesh reference (document check or server), for the mesh picker. */
   protected readonly meshProblem = computed(() => {
-    const message = issueAt(this.issues(), `primitives[${this.index()}].meshId`);
-    return message ? `Mesh ${message}` : null;
+    return meshReferenceProblem(issueAt(this.issues(), `primitives[${this.index()}].meshId`));
   });
   protected readonly selectedMaterial = computed(() => {
     const id = this.primitive()['materialId'];
