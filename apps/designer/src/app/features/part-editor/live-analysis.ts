@@ -6,10 +6,11 @@ import type { DraftDocument } from './draft-document';
 
 /**
  * Quiet time after the last keystroke before the report is recomputed (ms). Short enough that
- * keystroke → updated report stays within 150 ms for a 50-primitive part (`npm run bench`);
- * requests fired between fast keystrokes are cancelled by the next one (switchMap).
+ * keystroke → updated report stays within 150 ms for a 50-primitive part (`npm run bench`), long
+ * enough to merge a held key's auto-repeat (about 30 ms apart); a request fired between slower
+ * keystrokes is cancelled by the next one (switchMap).
  */
-export const ANALYSIS_DEBOUNCE_MS = 60;
+export const ANALYSIS_DEBOUNCE_MS = 40;
 
 /** What the live report panel shows. `report` is the newest report received, kept while the next one loads or fails. */
 export interface LiveAnalysis {
