@@ -105,6 +105,23 @@ describe('a client that goes away', () => {
     await expect(run.mock.results[0].value).rejects.toMatchObject({ status: 499, code: 'cancelled' });
   });
 
+  it('lets an analysis it gave up on finish on the same worker thread, and answers cancelled', async () => {
+    const pool = (t.ctx.compute as unknown as { pool: { threads: { threadId: number }[] } }).pool;
+    await request(t.app).post('/api/v1/analyze').set(bearer(token)).send(racket).expect(200);
+    const before = pool.threads.map((w) => w.threadId);
+    // Thousands of primitives: tens of milliseconds of schema checks on the worker, so the client leaves while it runs.
+    const big = { ...racket, primitives: Array.from({ length: 5000 }, (_, i) => ({ id: `s${i}`, shape: 'sphere', radius: 0.01, density: 500, position: [0, 0, i * 0.001] })) };
+    const run = jest.spyOn(t.ctx.compute, 'run');
+    const req = post('/api/v1/analyze', big);
+    req.on('error', () => undefined);
+    while (run.mock.calls.length === 0) await new Promise((r) => setTimeout(r, 5));
+    await new Promise((r) => setTimeout(r, 15));
+    req.destroy();
+    await expect(run.mock.results[0].value).rejects.toMatchObject({ status: 499, code: 'cancelled' });
+    await request(t.app).post('/api/v1/analyze').set(bearer(token)).send(racket).expect(200);
+    expect(pool.threads.map((w) => w.threadId)).toEqual(before);
+  });
+
   it('cancels nothing that was answered, however many requests one kept-alive connection carries', async () => {
     const run = jest.spyOn(t.ctx.compute, 'run');
     const warnings: string[] = [];

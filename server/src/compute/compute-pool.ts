@@ -21,12 +21,21 @@ export class ComputePool {
     });
   }
 
-  /** Runs the task on a worker; engine refusals become 400 (invalid) or 422 (unanalysable). */
+  /**
+   * Runs the task on a worker; engine refusals become 400 (invalid) or 422 (unanalysable).
+   * `signal` cancels the task: a queued one is dropped, a running one ends with its worker thread.
+   * An analysis is the exception: it takes milliseconds, far less than starting a replacement
+   * worker (the live report cancels a request at nearly every keystroke), so once handed over it
+   * runs to the end and only then answers `cancelled`.
+   */
   async run<T>(task: ComputeTask, signal?: AbortSignal): Promise<T> {
     let outcome: ComputeOutcome;
     try {
       const transferList = task.kind === 'scatter' && task.progress ? [task.progress] : undefined;
-      outcome = await this.pool.run(task, { signal, transferList: transferList as never });
+      const interruptible = task.kind !== 'analyze';
+      if (!interruptible && signal?.aborted) throw Object.assign(new Error('The client went away.'), { name: 'AbortError' });
+      outcome = await this.pool.run(task, { signal: interruptible ? signal : undefined, transferList: transferList as never });
+      if (!interruptible && signal?.aborted) throw Object.assign(new Error('The client went away.'), { name: 'AbortError' });
     } catch (err) {
       // The client went away (or a study was cancelled): not a server fault, nothing to log.
       if ((err as Error)?.name === 'AbortError') throw new AppError(499, 'cancelled', 'The request was cancelled before it finished.');
