@@ -92,6 +92,14 @@ describe('TwPartViewer', () => {
     // While the motion is being fetched the view is not stable; let the zero-delay request go out.
     if (simulation) await fixture.whenStable();
     else await settle();
+    await partDrawn();
+  }
+
+  /** Lets the part's deferred redraw run: the next frame, then the task after it. */
+  async function partDrawn(): Promise<void> {
+    runFrames(0);
+    await new Promise((resolve) => setTimeout(resolve, 0));
+    fixture.detectChanges();
   }
 
   /** Lets queued macrotasks run (the zero-delay request timer), then updates the view. */

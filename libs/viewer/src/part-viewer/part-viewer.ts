@@ -161,6 +161,7 @@ export class TwPartViewer {
   private resizeObserver: ResizeObserver | null = null;
   private frame: number | null = null;
   private lastFrameAt = 0;
+  private partRedrawPending = false;
   private lastReadoutAt = 0;
   private simTime = 0;
   private readonly scratchQuaternion = new Quaternion();
@@ -170,12 +171,14 @@ export class TwPartViewer {
     afterNextRender(() => this.startStages());
     inject(DestroyRef).onDestroy(() => this.tearDown());
 
-    // Redraw the part when the document or report changes.
+    // Redraw the part when the document or report changes: after the browser has painted what
+    // changed with it, so the figures beside the view show first (a rebuild on a CPU renderer
+    // takes tens of milliseconds); changes in between are drawn once, the latest.
     effect(() => {
-      const doc = this.document();
-      const report = this.report();
+      this.document();
+      this.report();
       if (!this.stagesReady()) return;
-      untracked(() => this.showPart(doc, report));
+      untracked(() => this.schedulePartRedraw());
     });
     // A new motion: rebuild the polhode and the angular-momentum arrow, rewind.
     effect(() => {
@@ -315,6 +318,16 @@ export class TwPartViewer {
     this.applyTime();
     // Without a motion yet applyTime draws nothing: the new picture still has to show.
     stage.requestRender();
+  }
+
+  /** Draws the current document on the first turn of the event loop after the next paint. */
+  private schedulePartRedraw(): void {
+    if (this.partRedrawPending) return;
+    this.partRedrawPending = true;
+    requestAnimationFrame(() => setTimeout(() => {
+      this.partRedrawPending = false;
+      this.redrawPart();
+    }));
   }
 
   /** Draws the current document again (an uploaded mesh arrived or failed). */
