@@ -1,7 +1,8 @@
+import compression from 'compression';
 import express, { Router } from 'express';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
-import { compressedCopies } from './compressed-copies';
+import zlib from 'node:zlib';
 
 /** Hashed assets (the builder names them `chunk-7BDNFNOT.js`) never change under their name; everything else is revalidated. */
 const cacheControl = (file: string) => (/-[0-9A-Z]{8}\.(js|css|woff2?)$/.test(file) ? 'public, max-age=31536000, immutable' : 'no-cache');
@@ -13,10 +14,11 @@ const cacheControl = (file: string) => (/-[0-9A-Z]{8}\.(js|css|woff2?)$/.test(fi
  */
 export function serveApps(distDir: string): Router {
   const router = Router();
+  // brotli when the browser accepts it, else gzip (plain-HTTP Chromium offers only gzip); text only.
+  router.use(compression({ brotli: { params: { [zlib.constants.BROTLI_PARAM_QUALITY]: 5 } } }));
   const mount = (prefix: string, folder: string, name: string) => {
     const root = path.join(distDir, folder, 'browser');
     const index = path.join(root, 'index.html');
-    router.use(prefix, compressedCopies(root, cacheControl));
     router.use(prefix, express.static(root, {
       index: false,
       setHeaders: (res, file) => { res.setHeader('Cache-Control', cacheControl(file)); },
