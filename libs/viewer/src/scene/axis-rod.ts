@@ -1,4 +1,5 @@
 import { ConeGeometry, CylinderGeometry, Group, Mesh, MeshBasicMaterial, Quaternion, Vector3 } from 'three';
+import { sharedMaterial } from './shared-materials';
 
 const Y = new Vector3(0, 1, 0);
 
@@ -9,7 +10,7 @@ const Y = new Vector3(0, 1, 0);
  */
 export function axisRod(direction: readonly number[], length: number, radius: number, colour: string, twoSided = true): Group {
   const group = new Group();
-  const material = new MeshBasicMaterial({ color: colour });
+  const material = sharedMaterial(`rod:${colour}`, () => new MeshBasicMaterial({ color: colour }));
   const from = twoSided ? -length : 0;
   const headLength = radius * 8;
   const shaft = new CylinderGeometry(radius, radius, length - from - headLength, 12);

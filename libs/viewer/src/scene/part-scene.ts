@@ -1,4 +1,5 @@
 import { Box3, DoubleSide, Group, Matrix4, Mesh, MeshStandardMaterial, SphereGeometry, TorusGeometry, Vector3 } from 'three';
+import { sharedMaterial } from './shared-materials';
 import type { PartDocument } from '@tumblewise/shared';
 import type { SpinReport } from '@tumblewise/engine';
 import { axisRod } from './axis-rod';
@@ -46,10 +47,12 @@ export function buildPartScene(doc: PartDocument, report: SpinReport, uploaded?:
   solids.position.set(-c[0], -c[1], -c[2]);
   body.add(solids);
 
-  const solid = new MeshStandardMaterial({ color: VIEWER_COLOURS.solid, roughness: 0.65, metalness: 0.05 });
-  const removal = new MeshStandardMaterial({ color: VIEWER_COLOURS.removal, transparent: true, opacity: 0.35, depthWrite: false, side: DoubleSide });
-  const twoSided = { add: solid.clone(), remove: removal };
-  twoSided.add.side = DoubleSide;
+  const solid = sharedMaterial('part:solid', () => new MeshStandardMaterial({ color: VIEWER_COLOURS.solid, roughness: 0.65, metalness: 0.05 }));
+  const removal = sharedMaterial('part:removal', () => new MeshStandardMaterial({ color: VIEWER_COLOURS.removal, transparent: true, opacity: 0.35, depthWrite: false, side: DoubleSide }));
+  const twoSided = {
+    add: sharedMaterial('part:solid-two-sided', () => new MeshStandardMaterial({ color: VIEWER_COLOURS.solid, roughness: 0.65, metalness: 0.05, side: DoubleSide })),
+    remove: removal,
+  };
   const placement = new Matrix4();
   const points: Group[] = [];
   const notDrawn: string[] = [];
@@ -92,7 +95,7 @@ export function buildPartScene(doc: PartDocument, report: SpinReport, uploaded?:
   const reach = Math.max(1e-3, box.isEmpty() ? 0 : farthestCorner(box, new Vector3()), ...doc.primitives.map((p) => distance(p.position, c)));
 
   const markerGeometry = new SphereGeometry(reach * 0.035, 16, 12);
-  const markerMaterial = new MeshStandardMaterial({ color: VIEWER_COLOURS.pointMass, roughness: 0.4 });
+  const markerMaterial = sharedMaterial('part:point-mass', () => new MeshStandardMaterial({ color: VIEWER_COLOURS.pointMass, roughness: 0.4 }));
   for (const marker of points) marker.add(new Mesh(markerGeometry, markerMaterial));
 
   const rodRadius = reach * 0.008;
@@ -103,7 +106,7 @@ export function buildPartScene(doc: PartDocument, report: SpinReport, uploaded?:
   });
   const spin = axisRod(doc.spin.axis, reach * 1.45, rodRadius * 0.6, VIEWER_COLOURS.spinAxis);
   spin.name = 'axis:spin';
-  const ring = new Mesh(new TorusGeometry(reach * 0.12, rodRadius * 0.6, 8, 40, Math.PI * 1.6), new MeshStandardMaterial({ color: VIEWER_COLOURS.spinAxis }));
+  const ring = new Mesh(new TorusGeometry(reach * 0.12, rodRadius * 0.6, 8, 40, Math.PI * 1.6), sharedMaterial('part:spin-ring', () => new MeshStandardMaterial({ color: VIEWER_COLOURS.spinAxis })));
   // The rod is built along +y; the ring goes round that axis near the tip.
   ring.rotation.x = Math.PI / 2;
   ring.position.y = reach * 1.2;

@@ -1,4 +1,5 @@
 import { BufferGeometry, Float32BufferAttribute, Group, Line, LineBasicMaterial, Mesh, MeshStandardMaterial, SphereGeometry } from 'three';
+import { sharedMaterial } from './shared-materials';
 import { axisRod } from './axis-rod';
 import { AXIS_ROLES, VIEWER_COLOURS } from './viewer-palette';
 
@@ -17,7 +18,7 @@ export interface PolhodeScene {
 export function buildPolhodeScene(path: readonly (readonly number[])[]): PolhodeScene {
   const root = new Group();
   root.name = 'polhode';
-  const sphere = new Mesh(new SphereGeometry(1, 48, 24), new MeshStandardMaterial({ color: '#dfe6ee', transparent: true, opacity: 0.45, depthWrite: false }));
+  const sphere = new Mesh(new SphereGeometry(1, 48, 24), sharedMaterial('polhode:sphere', () => new MeshStandardMaterial({ color: '#dfe6ee', transparent: true, opacity: 0.45, depthWrite: false })));
   sphere.name = 'momentum-sphere';
   root.add(sphere);
   const positions = new Float32Array(path.length * 3);
@@ -29,7 +30,7 @@ export function buildPolhodeScene(path: readonly (readonly number[])[]): Polhode
   });
   const geometry = new BufferGeometry();
   geometry.setAttribute('position', new Float32BufferAttribute(positions, 3));
-  const line = new Line(geometry, new LineBasicMaterial({ color: '#1b1f24' }));
+  const line = new Line(geometry, sharedMaterial('polhode:path', () => new LineBasicMaterial({ color: '#1b1f24' })));
   line.name = 'polhode-path';
   root.add(line);
   AXIS_ROLES.forEach((role, i) => {
@@ -37,7 +38,7 @@ export function buildPolhodeScene(path: readonly (readonly number[])[]): Polhode
     rod.name = `axis:${role}`;
     root.add(rod);
   });
-  const marker = new Mesh(new SphereGeometry(0.05, 16, 12), new MeshStandardMaterial({ color: VIEWER_COLOURS.momentum }));
+  const marker = new Mesh(new SphereGeometry(0.05, 16, 12), sharedMaterial('polhode:marker', () => new MeshStandardMaterial({ color: VIEWER_COLOURS.momentum })));
   marker.name = 'polhode-marker';
   if (path.length) marker.position.set(path[0][0], path[0][1], path[0][2]);
   root.add(marker);
