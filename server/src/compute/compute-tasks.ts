@@ -66,8 +66,10 @@ export function runComputeTask(task: ComputeTask): ComputeOutcome {
       case 'scatter': {
         let last = 0;
         const value = runScatterStudy(task.input, (done, total) => {
+          // Every 200 ms, and at each twentieth of the samples (a short study still shows its progress).
           const now = Date.now();
-          if (task.progress && (now - last > 200 || done === total)) {
+          const step = Math.max(1, Math.floor(total / 20));
+          if (task.progress && (now - last > 200 || done === total || done % step === 0)) {
             last = now;
             task.progress.postMessage({ done, total });
           }

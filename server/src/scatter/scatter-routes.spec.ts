@@ -24,12 +24,12 @@ async function until(studyId: string, done: (s: { state: string; progress: numbe
     if (seen[seen.length - 1] !== `${s.state}`) seen.push(s.state);
     return s as { state: string; progress: number };
   };
-  return eventually(probe, done, { what: 'the study reaching that state', timeoutMs: 30_000 });
+  return eventually(probe, done, { what: 'the study reaching that state', timeoutMs: 30_000, intervalMs: 10 });
 }
 
 it('runs a study as a job: queued → running with progress → done, reproducible by seed', async () => {
-  const started = await request(t.app).post(`${base}/scatter`).set(bearer(owner.accessToken)).send({ variantId, samples: 3000, seed: 7, tolerances: { hoop: { density: 0.08 } } }).expect(202);
-  expect(started.body).toMatchObject({ state: 'queued', progress: 0, samples: 3000, seed: 7 });
+  const started = await request(t.app).post(`${base}/scatter`).set(bearer(owner.accessToken)).send({ variantId, samples: 20000, seed: 7, tolerances: { hoop: { density: 0.08 } } }).expect(202);
+  expect(started.body).toMatchObject({ state: 'queued', progress: 0, samples: 20000, seed: 7 });
   const seen: string[] = [];
   let sawProgress = false;
   const done = await until(started.body.id, (s) => { if (s.state === 'running' && s.progress > 0 && s.progress < 1) sawProgress = true; return s.state === 'done' || s.state === 'failed'; }, seen);
@@ -39,11 +39,11 @@ it('runs a study as a job: queued → running with progress → done, reproducib
   expect(sawProgress).toBe(true);
   expect(done.progress).toBe(1);
   const result = (done as unknown as { result: { samples: number; verdictChangedShare: number; sensitivities: unknown[] } }).result;
-  expect(result.samples).toBe(3000);
+  expect(result.samples).toBe(20000);
   expect(result.verdictChangedShare).toBeGreaterThanOrEqual(0);
   expect(result.sensitivities.length).toBeGreaterThan(0);
 
-  const again = await request(t.app).post(`${base}/scatter`).set(bearer(owner.accessToken)).send({ variantId, samples: 3000, seed: 7, tolerances: { hoop: { density: 0.08 } } }).expect(202);
+  const again = await request(t.app).post(`${base}/scatter`).set(bearer(owner.accessToken)).send({ variantId, samples: 20000, seed: 7, tolerances: { hoop: { density: 0.08 } } }).expect(202);
   const second = await until(again.body.id, (s) => s.state === 'done');
   expect((second as unknown as { result: unknown }).result).toEqual(result);
 });
