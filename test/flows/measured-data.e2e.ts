@@ -106,7 +106,8 @@ it('shows the seeded rig readings against the prediction, refuses a bad CSV by l
     'end-over-end (rig C),0.0031,kg·m²,trifilar pendulum',
   ].join('\n');
   // This time from the keyboard: focus the button, press Enter, answer the file dialog.
-  await byTestId(page, 'measurements-choose').focus();
+  await byTestId(page, 'measurements-choose').and(page.locator(':not([disabled])')).focus();
+  await page.waitForFunction(() => document.activeElement?.getAttribute('data-testid') === 'measurements-choose');
   const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.keyboard.press('Enter')]);
   await chooser.setFiles({ name: 'frame-rig-c.csv', mimeType: 'text/csv', buffer: Buffer.from(good) });
   await byTestId(page, 'measurements-status').filter({ hasText: 'Imported 3 readings from frame-rig-c.csv' }).waitFor();

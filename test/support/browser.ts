@@ -19,6 +19,10 @@ export async function openBrowser(): Promise<{ context: BrowserContext; page: Pa
       '--disable-component-update', '--disable-sync', '--enable-unsafe-swiftshader'],
   });
   const page = context.pages()[0] ?? (await context.newPage());
+  // Playwright starts catching file dialogs when the first 'filechooser' listener is added, and
+  // does so asynchronously: a flow that adds it just before the click can lose the dialog to that
+  // race. A listener from the start keeps the catching on for the whole flow.
+  page.on('filechooser', () => undefined);
   return { context, page, close: async () => { await context.close(); rmSync(profile, { recursive: true, force: true }); } };
 }
 
