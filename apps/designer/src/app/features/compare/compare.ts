@@ -1,26 +1,21 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input, linkedSignal, signal } from '@angular/core';
-import { rxResource } from '@angular/core/rxjs-interop';
 import { MatAnchor, MatButton } from '@angular/material/button';
 import { MatCheckbox } from '@angular/material/checkbox';
 import { MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatRadioButton, MatRadioGroup } from '@angular/material/radio';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
-import { API_BASE_URL, FileDownloads, PartsApi, toApiError, VariantsApi, WorkspaceContext } from '@tumblewise/api-client';
+import { API_BASE_URL, FileDownloads, toApiError, WorkspaceContext } from '@tumblewise/api-client';
 import { buildComparison, type Comparison, type Variant } from '@tumblewise/shared';
 import { EmptyState, ErrorBanner, LoadingState, PageHeader, StatusChip } from '@tumblewise/ui';
 import { provideCharts } from '@tumblewise/viewer';
 import { NgxEchartsDirective } from 'ngx-echarts';
+import { partPage, variantLabel } from '../../core/part-page';
 import { chartableRows, compareChartOptions, type ChartFigure } from './compare-chart';
 import { formatDelta, formatValue } from './compare-figures';
 
 /** Fewest and most variants compared at once. */
 export const COMPARE_LIMITS = { min: 2, max: 6 } as const;
-
-/** The label a variant goes by in the table ("v3 longer throat"). */
-export function variantLabel(v: Pick<Variant, 'number' | 'label'>): string {
-  return `v${v.number}${v.label ? ` ${v.label}` : ''}`;
-}
 
 /**
  * Compare 2–6 variants of a part side by side: the shared comparison table with deltas against a
@@ -63,8 +58,6 @@ export class Compare {
   readonly baseline = input<string | undefined>();
 
   protected readonly workspace = inject(WorkspaceContext);
-  private readonly partsApi = inject(PartsApi);
-  private readonly variantsApi = inject(VariantsApi);
   private readonly downloads = inject(FileDownloads);
   private readonly router = inject(Router);
   private readonly route = inject(ActivatedRoute);
@@ -75,19 +68,12 @@ export class Compare {
   protected readonly formatDelta = formatDelta;
   protected readonly variantLabel = variantLabel;
 
-  protected readonly part = rxResource({
-    params: () => this.scope(),
-    stream: ({ params }) => this.partsApi.get(params.workspaceId, params.partId),
-  });
-  protected readonly allVariants = rxResource({
-    params: () => this.scope(),
-    stream: ({ params }) => this.variantsApi.list(params.workspaceId, params.partId),
-  });
-  protected readonly loadError = computed(() => {
-    const error = this.allVariants.error() ?? this.part.error();
-    return error ? toApiError(error).message : null;
-  });
-  protected readonly list = computed<Variant[]>(() => (this.allVariants.hasValue() ? this.allVariants.value() : []));
+  /** The part and its variants (the compared ones live in `?variants=`, not `?variant=`). */
+  private readonly page = partPage({ partId: this.partId });
+  protected readonly part = this.page.part;
+  protected readonly allVariants = this.page.variants;
+  protected readonly loadError = this.page.loadError;
+  protected readonly list = this.page.list;
 
   /** The chosen ids, in the order of the part's variants: from the address, else the newest two. */
   protected readonly selectedIds = linkedSignal<string[]>(() => {
@@ -191,17 +177,11 @@ export class Compare {
 
   /** Loads the variants again after a failure. */
   protected reload(): void {
-    this.part.reload();
-    this.allVariants.reload();
+    this.page.reload();
   }
 
   protected isSelected(id: string): boolean {
     return this.selectedIds().includes(id);
-  }
-
-  private scope(): { workspaceId: string; partId: string } | undefined {
-    const workspaceId = this.workspace.workspaceId();
-    return workspaceId ? { workspaceId, partId: this.partId() } : undefined;
   }
 
   private writeAddress(): void {

@@ -7,10 +7,11 @@ import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatTooltip } from '@angular/material/tooltip';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
-import { MeasurementsApi, PartsApi, ProjectsApi, saveBlob, SettingsApi, toApiError, VariantsApi, WorkspaceContext } from '@tumblewise/api-client';
-import type { ErrorProblem, Measurement, MeasurementsRemoved, Variant } from '@tumblewise/shared';
+import { MeasurementsApi, saveBlob, SettingsApi, toApiError, WorkspaceContext } from '@tumblewise/api-client';
+import type { ErrorProblem, Measurement, MeasurementsRemoved } from '@tumblewise/shared';
 import { Confirmation, type ConfirmRequest, EmptyState, ErrorBanner, LoadingState, PageHeader, StatusChip } from '@tumblewise/ui';
 import { filter, type Observable, type Subscription, switchMap } from 'rxjs';
+import { partPage, variantLabel } from '../../core/part-page';
 import {
   comparedWith,
   DIFFERENCE_FLAG_PERCENT,
@@ -24,11 +25,6 @@ import {
   templateFileName,
   type InertiaUnit,
 } from './measured-figures';
-
-/** The label a variant goes by ("v2 spin about face normal"). */
-export function variantName(v: Pick<Variant, 'number' | 'label'>): string {
-  return `v${v.number}${v.label ? ` ${v.label}` : ''}`;
-}
 
 /** The unit moments are shown in when the workspace settings cannot be read (the server's default). */
 const FALLBACK_UNIT: InertiaUnit = 'g·cm²';
@@ -55,9 +51,6 @@ export class MeasuredData {
   readonly variant = input<string | undefined>();
 
   protected readonly workspace = inject(WorkspaceContext);
-  private readonly projectsApi = inject(ProjectsApi);
-  private readonly partsApi = inject(PartsApi);
-  private readonly variantsApi = inject(VariantsApi);
   private readonly settingsApi = inject(SettingsApi);
   private readonly measurementsApi = inject(MeasurementsApi);
   private readonly router = inject(Router);
@@ -66,33 +59,25 @@ export class MeasuredData {
 
   protected readonly threshold = DIFFERENCE_FLAG_PERCENT;
   protected readonly example = EXAMPLE_CSV;
-  protected readonly variantName = variantName;
+  protected readonly variantLabel = variantLabel;
   protected readonly comparedWith = comparedWith;
   protected readonly formatEntered = formatEntered;
   protected readonly formatRecorded = formatRecorded;
   /** Designers, admins and owners import; reviewers read. */
   protected readonly mayImport = computed(() => this.workspace.can('projects.edit'));
 
-  private readonly scope = computed(() => {
-    const workspaceId = this.workspace.workspaceId();
-    return workspaceId ? { workspaceId, projectId: this.projectId(), partId: this.partId() } : undefined;
-  });
-  protected readonly project = rxResource({ params: () => this.scope(), stream: ({ params }) => this.projectsApi.get(params.workspaceId, params.projectId) });
-  protected readonly part = rxResource({ params: () => this.scope(), stream: ({ params }) => this.partsApi.get(params.workspaceId, params.partId) });
-  protected readonly variants = rxResource({ params: () => this.scope(), stream: ({ params }) => this.variantsApi.list(params.workspaceId, params.partId) });
+  /** The project (for the breadcrumbs), the part, its variants and the shown one (of `?variant=`, else the newest). */
+  private readonly page = partPage({ projectId: this.projectId, partId: this.partId, variant: this.variant });
+  protected readonly project = this.page.project;
+  protected readonly part = this.page.part;
+  protected readonly variants = this.page.variants;
+  protected readonly list = this.page.list;
+  protected readonly chosen = this.page.chosen;
   private readonly settings = rxResource({ params: () => this.workspace.workspaceId() ?? undefined, stream: ({ params }) => this.settingsApi.get(params) });
 
   /** The workspace's inertia display unit; the default when the settings could not be read. */
   protected readonly unit = computed<InertiaUnit>(() => (this.settings.hasValue() ? this.settings.value().displayUnits.inertia : FALLBACK_UNIT));
   protected readonly unitFallback = computed(() => !!this.settings.error());
-
-  protected readonly list = computed<Variant[]>(() => (this.variants.hasValue() ? this.variants.value() : []));
-  /** The variant shown: the one in the address, else the newest; null when the address names none of this part's. */
-  protected readonly chosen = computed<Variant | null>(() => {
-    const list = this.list();
-    const asked = this.variant();
-    return asked ? (list.find((v) => v.id === asked) ?? null) : (list[list.length - 1] ?? null);
-  });
 
   protected readonly measurements = rxResource({
     params: () => {
@@ -103,10 +88,7 @@ export class MeasuredData {
     stream: ({ params }) => this.measurementsApi.list(params.workspaceId, params.variantId),
   });
 
-  protected readonly loadError = computed(() => {
-    const error = this.variants.error() ?? this.part.error();
-    return error ? toApiError(error).message : null;
-  });
+  protected readonly loadError = this.page.loadError;
   protected readonly rowsError = computed(() => {
     const error = this.measurements.error();
     return error ? toApiError(error).message : null;
@@ -240,9 +222,7 @@ export class MeasuredData {
 
   /** Loads everything again after a failure. */
   protected reload(): void {
-    this.project.reload();
-    this.part.reload();
-    this.variants.reload();
+    this.page.reload();
     this.settings.reload();
   }
 

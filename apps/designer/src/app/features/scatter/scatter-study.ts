@@ -7,13 +7,14 @@ import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/m
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
-import { MaterialsApi, PartsApi, ScatterApi, toApiError, VariantsApi, WorkspaceContext } from '@tumblewise/api-client';
+import { MaterialsApi, ScatterApi, toApiError, WorkspaceContext } from '@tumblewise/api-client';
 import type { ScatterResult, Sensitivity } from '@tumblewise/engine';
-import type { PartDocument, ScatterStudy as Study, Variant } from '@tumblewise/shared';
+import type { PartDocument, ScatterStudy as Study } from '@tumblewise/shared';
 import { applyServerError, EmptyState, ErrorBanner, FieldErrorPipe, focusFirstInvalid, LoadingState, PageHeader, VerdictChip } from '@tumblewise/ui';
 import { provideCharts, SERIES_COLOURS, VIEWER_COLOURS } from '@tumblewise/viewer';
 import { NgxEchartsDirective } from 'ngx-echarts';
 import { defer, repeat, takeWhile, type Subscription } from 'rxjs';
+import { partPage, variantLabel } from '../../core/part-page';
 import { histogramOptions } from './scatter-charts';
 import { defaultTolerances, SAMPLE_LIMITS, TOLERANCE_LIMITS, tolerancesBody, type ToleranceRow } from './scatter-tolerances';
 
@@ -84,8 +85,6 @@ export class ScatterStudyPage {
   readonly variant = input<string | undefined>();
 
   protected readonly workspace = inject(WorkspaceContext);
-  private readonly partsApi = inject(PartsApi);
-  private readonly variantsApi = inject(VariantsApi);
   private readonly materialsApi = inject(MaterialsApi);
   private readonly scatterApi = inject(ScatterApi);
   private readonly pollMs = inject(SCATTER_POLL_MS);
@@ -99,26 +98,18 @@ export class ScatterStudyPage {
   protected readonly Math = Math;
   protected readonly mayRun = computed(() => this.workspace.can('projects.edit'));
 
-  private readonly scope = computed(() => {
-    const workspaceId = this.workspace.workspaceId();
-    return workspaceId ? { workspaceId, partId: this.partId() } : undefined;
-  });
-  protected readonly part = rxResource({ params: () => this.scope(), stream: ({ params }) => this.partsApi.get(params.workspaceId, params.partId) });
-  protected readonly variants = rxResource({ params: () => this.scope(), stream: ({ params }) => this.variantsApi.list(params.workspaceId, params.partId) });
+  /** The part, its variants and the studied one (of `?variant=`, else the newest). */
+  private readonly page = partPage({ partId: this.partId, variant: this.variant });
+  protected readonly part = this.page.part;
+  protected readonly chosen = this.page.chosen;
+  protected readonly variantLabel = variantLabel;
   private readonly materials = rxResource({ params: () => this.workspace.workspaceId() ?? undefined, stream: ({ params }) => this.materialsApi.list(params) });
 
   protected readonly loadError = computed(() => {
-    const error = this.variants.error() ?? this.part.error() ?? this.materials.error();
-    return error ? toApiError(error).message : null;
+    const error = this.materials.error();
+    return this.page.loadError() ?? (error ? toApiError(error).message : null);
   });
-  protected readonly ready = computed(() => this.variants.hasValue() && this.materials.hasValue());
-  /** The studied variant: the one in the address, else the newest; null when the address names none of this part's. */
-  protected readonly chosen = computed<Variant | null>(() => {
-    if (!this.variants.hasValue()) return null;
-    const list = this.variants.value();
-    const asked = this.variant();
-    return asked ? (list.find((v) => v.id === asked) ?? null) : (list[list.length - 1] ?? null);
-  });
+  protected readonly ready = computed(() => this.page.variants.hasValue() && this.materials.hasValue());
   protected readonly rows = computed<ToleranceRow[]>(() => {
     const v = this.chosen();
     if (!v || !this.materials.hasValue()) return [];
@@ -227,8 +218,7 @@ export class ScatterStudyPage {
 
   /** Loads the data again after a failure. */
   protected reload(): void {
-    this.part.reload();
-    this.variants.reload();
+    this.page.reload();
     this.materials.reload();
   }
 
