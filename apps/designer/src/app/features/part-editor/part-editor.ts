@@ -21,7 +21,6 @@ import { PartSettingsForm, type SettingsChange } from './part-settings-form';
 import { SHAPE_PALETTE } from './primitive-fields';
 import { PrimitiveForm, type PrimitiveChange } from './primitive-form';
 import { PrimitiveList, type MoveRequest } from './primitive-list';
-import { PrimitiveToleranceForm } from './primitive-tolerance-form';
 import { SaveVariantDialog, type SaveVariantChoice, type SaveVariantDialogData } from './save-variant-dialog';
 import { SignOffSlot } from './sign-off-slot';
 import { ViewerSlot } from './viewer-slot';
@@ -63,7 +62,6 @@ const FIELD_PATH = /^(primitives\[\d+\]\.|spin\.|grip\.|category$|division$)/;
     LoadingState,
     PrimitiveList,
     PrimitiveForm,
-    PrimitiveToleranceForm,
     PartSettingsForm,
     SpinReportPanel,
     VariantHistory,

@@ -13,6 +13,7 @@ import { meshReferenceProblem } from './mesh-picker-model';
 import type { DraftPrimitive } from './draft-document';
 import { SHAPE_FIELDS, shapeLabel, type DimensionField } from './primitive-fields';
 import { formValueToPrimitive, numericControls, primitiveToFormValue, type NumericControl, type PrimitiveFormValue } from './primitive-form-model';
+import { densityDefaultHint, hasSizeTolerance, toleranceToForm, withTolerance } from './tolerance-fields';
 
 /** A change the form made to its primitive, and the form control that made it. */
 export interface PrimitiveChange {
@@ -20,10 +21,17 @@ export interface PrimitiveChange {
   field: string;
 }
 
+/** The form controls of the manufacturing tolerance, and the document path each one writes. */
+const TOLERANCE_CONTROLS = { toleranceDensity: 'tolerance.density', toleranceSize: 'tolerance.size' } as const;
+type ToleranceControl = keyof typeof TOLERANCE_CONTROLS;
+const isToleranceControl = (name: string): name is ToleranceControl => name in TOLERANCE_CONTROLS;
+
 /**
- * The form of one primitive in display units (mm, g, °, kg/m³). It is rebuilt from the document when
- * another primitive is selected or `revision` changes (undo, reorder, load); while the designer types
- * it emits each change converted to SI. Problems found by the schema or the server appear at their field.
+ * The form of one primitive in display units (mm, g, °, kg/m³), ending with its manufacturing
+ * tolerance (± % density or mass, ± mm on its dimensions: the scatter study's starting values). It is
+ * rebuilt from the document when another primitive is selected or `revision` changes (undo, reorder,
+ * load); while the designer types it emits each change converted to SI. Problems found by the schema
+ * or the server appear at their field.
  */
 @Component({
   selector: 'tw-primitive-form',
@@ -62,6 +70,12 @@ export class PrimitiveForm {
     const p = this.primitive();
     return Array.isArray(p['triangles']) ? (p['triangles'] as unknown[]).length : null;
   });
+  protected readonly hasSizeTolerance = computed(() => hasSizeTolerance(this.shape()));
+  /** What an empty density (mass) scatter stands for. */
+  protected readonly toleranceHint = computed(() => densityDefaultHint(this.primitive(), this.materials()));
+  /** The tolerance fields' problems in words (the schema's or the server's). */
+  protected readonly toleranceDensityError = computed(() => `${this.isPoint() ? 'Mass' : 'Density'} scatter ${this.toleranceIssue('toleranceDensity') ?? ''}`);
+  protected readonly toleranceSizeError = computed(() => `Dimension scatter ${this.toleranceIssue('toleranceSize') ?? ''}`);
   /** A problem with the mesh reference (document check or server), for the mesh picker. */
   protected readonly meshProblem = computed(() => {
     return meshReferenceProblem(issueAt(this.issues(), `primitives[${this.index()}].meshId`));
@@ -123,6 +137,9 @@ export class PrimitiveForm {
     const value = primitiveToFormValue(primitive);
     const controls: Record<string, FormControl<string | number | null>> = {};
     for (const [name, v] of Object.entries(value)) controls[name] = new FormControl<string | number | null>({ value: v, disabled: readonly });
+    const tolerance = toleranceToForm(primitive);
+    controls['toleranceDensity'] = this.toleranceControl('toleranceDensity', tolerance.densityPercent, readonly);
+    if (hasSizeTolerance(primitive.shape)) controls['toleranceSize'] = this.toleranceControl('toleranceSize', tolerance.sizeMm, readonly);
     const form = new FormGroup(controls);
     this.numeric.set(numericControls(primitive.shape));
     this.source.set(String(value['source']));
@@ -135,15 +152,33 @@ export class PrimitiveForm {
     this.applyIssues(form, this.issues(), this.index());
   }
 
+  /**
+   * A tolerance control. A problem named at its path keeps it invalid through a validator, so the
+   * control's own checks as the designer types do not clear it before the document is checked again.
+   */
+  private toleranceControl(name: ToleranceControl, value: number | null, readonly: boolean): FormControl<string | number | null> {
+    return new FormControl<string | number | null>({ value, disabled: readonly }, () => (this.toleranceIssue(name) ? { rule: true } : null));
+  }
+
+  private toleranceIssue(name: ToleranceControl): string | null {
+    return issueAt(this.issues(), `primitives[${this.index()}].${TOLERANCE_CONTROLS[name]}`);
+  }
+
   private emitChange(form: FormGroup<Record<string, FormControl<string | number | null>>>, field: string): void {
     const value = form.getRawValue() as PrimitiveFormValue;
+    if (isToleranceControl(field)) {
+      // Number inputs give a number, or null when empty.
+      const tolerance = { densityPercent: (value['toleranceDensity'] ?? null) as number | null, sizeMm: (value['toleranceSize'] ?? null) as number | null };
+      this.changed.emit({ primitive: withTolerance(this.primitive(), tolerance), field: TOLERANCE_CONTROLS[field] });
+      return;
+    }
     if (field === 'source') this.source.set(String(value['source']));
     this.changed.emit({ primitive: formValueToPrimitive(value, this.primitive()), field });
   }
 
   private applyIssues(form: FormGroup<Record<string, FormControl<string | number | null>>>, issues: FieldIssues, index: number): void {
     const prefix = `primitives[${index}].`;
-    const pathOf: Record<string, string> = { id: 'id', materialId: 'materialId', density: 'density', mass: 'mass', meshId: 'meshId', scale: 'scale', mode: 'mode' };
+    const pathOf: Record<string, string> = { id: 'id', materialId: 'materialId', density: 'density', mass: 'mass', meshId: 'meshId', scale: 'scale', mode: 'mode', ...TOLERANCE_CONTROLS };
     for (const c of this.numeric()) pathOf[c.name] = c.path;
     for (const [name, control] of Object.entries(form.controls)) {
       const path = pathOf[name];
