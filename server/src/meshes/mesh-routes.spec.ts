@@ -1,6 +1,6 @@
 import request from 'supertest';
-import { Membership, Mesh, Variant } from '../models/init-models';
-import { stlFileName } from './mesh-routes';
+import { AuditEvent, Membership, Mesh, Part, Project, Variant } from '../models/init-models';
+import { inUseMessage, stlFileName } from './mesh-routes';
 import { asciiStl, binaryStl, cubeTriangles } from '../test-support/stl-fixtures';
 import { bearer, signUp, startTestApp, type TestApp } from '../test-support/test-app';
 
@@ -140,5 +140,80 @@ describe('reading an uploaded mesh back for drawing', () => {
     expect(stlFileName('block-40mm.stl')).toBe('block-40mm.stl');
     expect(stlFileName('Wing "v2"/final')).toBe('Wing _v2_final.stl');
     expect(stlFileName('***')).toBe('_.stl');
+  });
+});
+
+describe('deleting an uploaded mesh', () => {
+  const token = () => bearer(owner.accessToken);
+  const cubeDoc = (meshId: string) => ({ primitives: [{ id: 'block', shape: 'mesh', meshId, scale: 0.001, density: 1000 }], spin: { axis: [0, 0, 1], rate: 5 } });
+  const newPart = async (name: string, draft?: object) => {
+    const project = await request(t.app).post(`${base}/projects`).set(token()).send({ name: `${name} project`, category: 'other' }).expect(201);
+    return (await request(t.app).post(`${base}/projects/${project.body.id}/parts`).set(token()).send({ name, ...(draft ? { draft } : {}) }).expect(201)).body as { id: string; projectId: string; draftVersion: number };
+  };
+  const deletions = (meshId: string) => AuditEvent.findAll({ where: { workspaceId: owner.workspace.id, action: 'mesh.deleted', targetId: meshId } });
+
+  it('deletes a mesh nothing uses, and the audit trail names it, its deleter and its checksum', async () => {
+    const mesh = (await upload(binaryStl(cubeTriangles(30)), 'spare-block.stl').expect(201)).body;
+    expect((await request(t.app).get(`${base}/meshes/${mesh.id}/usage`).set(token()).expect(200)).body).toEqual({ parts: [] });
+    await request(t.app).delete(`${base}/meshes/${mesh.id}`).set(token()).expect(204);
+    expect(await Mesh.findByPk(mesh.id)).toBeNull();
+    await request(t.app).get(`${base}/meshes/${mesh.id}`).set(token()).expect(404);
+    const events = await deletions(mesh.id);
+    expect(events).toHaveLength(1);
+    expect(events[0]).toMatchObject({ actorId: owner.user.id, targetType: 'mesh', targetLabel: 'spare-block.stl', details: { triangles: 12, sha256: mesh.sha256 } });
+    // Deleting it again: gone, and no second entry.
+    await request(t.app).delete(`${base}/meshes/${mesh.id}`).set(token()).expect(404);
+    expect(await deletions(mesh.id)).toHaveLength(1);
+  });
+
+  it('keeps a mesh a part’s draft uses (409 naming the part) until the draft no longer uses it', async () => {
+    const mesh = (await upload(binaryStl(cubeTriangles(30)), 'grip-insert.stl').expect(201)).body;
+    const part = await newPart('Grip insert trial', cubeDoc(mesh.id));
+    const usage = await request(t.app).get(`${base}/meshes/${mesh.id}/usage`).set(token()).expect(200);
+    expect(usage.body).toEqual({ parts: [{ partId: part.id, projectId: part.projectId, partName: 'Grip insert trial', inDraft: true, variantNumbers: [] }] });
+    const refused = await request(t.app).delete(`${base}/meshes/${mesh.id}`).set(token()).expect(409);
+    expect(refused.body.error).toMatchObject({ code: 'mesh_in_use', field: 'meshId' });
+    expect(refused.body.error.message).toContain('“grip-insert.stl” is still used by Grip insert trial (its draft)');
+    expect(await Mesh.findByPk(mesh.id)).not.toBeNull();
+    expect(await deletions(mesh.id)).toHaveLength(0);
+    // The draft swaps the mesh for a sphere: nothing uses the mesh any more.
+    const sphere = { primitives: [{ id: 'ball', shape: 'sphere', radius: 0.02, density: 1000 }], spin: { axis: [0, 0, 1], rate: 5 } };
+    await request(t.app).patch(`${base}/parts/${part.id}`).set(token()).send({ draftVersion: part.draftVersion, draft: sphere }).expect(200);
+    await request(t.app).delete(`${base}/meshes/${mesh.id}`).set(token()).expect(204);
+    expect(await deletions(mesh.id)).toHaveLength(1);
+  });
+
+  it('keeps a mesh a saved variant was computed from, even when no draft uses it, until the part is deleted', async () => {
+    const mesh = (await upload(binaryStl(cubeTriangles(30)), 'head-core.stl').expect(201)).body;
+    const part = await newPart('Head core');
+    await request(t.app).post(`${base}/parts/${part.id}/variants`).set(token()).send({ document: cubeDoc(mesh.id) }).expect(201);
+    await request(t.app).post(`${base}/parts/${part.id}/variants`).set(token()).send({ document: cubeDoc(mesh.id) }).expect(201);
+    const usage = await request(t.app).get(`${base}/meshes/${mesh.id}/usage`).set(token()).expect(200);
+    expect(usage.body.parts).toEqual([expect.objectContaining({ partId: part.id, inDraft: false, variantNumbers: [1, 2] })]);
+    const refused = await request(t.app).delete(`${base}/meshes/${mesh.id}`).set(token()).expect(409);
+    expect(refused.body.error.message).toContain('Head core (saved variants v1, v2)');
+    await request(t.app).delete(`${base}/parts/${part.id}`).set(token()).expect(204);
+    await request(t.app).delete(`${base}/meshes/${mesh.id}`).set(token()).expect(204);
+  });
+
+  it('counts only this workspace’s parts, and answers 404 for another workspace’s mesh', async () => {
+    const mesh = (await upload(binaryStl(cubeTriangles(30)), 'shared-name.stl').expect(201)).body;
+    const stranger = await signUp(t.app);
+    // Another workspace's draft naming our mesh id (it cannot load it, but it must not hold it either).
+    const project = await Project.create({ workspaceId: stranger.workspace.id, name: 'Elsewhere', category: 'other', createdById: stranger.user.id });
+    await Part.create({ workspaceId: stranger.workspace.id, projectId: project.id, name: 'Elsewhere part', draft: cubeDoc(mesh.id) as Part['draft'] });
+    expect((await request(t.app).get(`${base}/meshes/${mesh.id}/usage`).set(token()).expect(200)).body).toEqual({ parts: [] });
+    const theirs = `/api/v1/workspaces/${stranger.workspace.id}`;
+    expect((await request(t.app).delete(`${theirs}/meshes/${mesh.id}`).set(bearer(stranger.accessToken))).status).toBe(404);
+    expect((await request(t.app).get(`${theirs}/meshes/${mesh.id}/usage`).set(bearer(stranger.accessToken))).status).toBe(404);
+    expect(await Mesh.findByPk(mesh.id)).not.toBeNull();
+    await request(t.app).delete(`${base}/meshes/${mesh.id}`).set(token()).expect(204);
+  });
+
+  it('names at most three parts in the refusal and counts the rest', () => {
+    const user = (n: number) => ({ partId: `p${n}`, projectId: 'x', partName: `Part ${n}`, inDraft: n % 2 === 0, variantNumbers: n === 1 ? [3] : [] });
+    const message = inUseMessage('block.stl', { parts: [1, 2, 4, 6].map(user) });
+    expect(message).toBe('The mesh “block.stl” is still used by Part 1 (saved variant v3); Part 2 (its draft); Part 4 (its draft) and 1 more part, so it was kept. '
+      + 'Remove it from those drafts, or delete those parts; a saved variant keeps the mesh it was computed from.');
   });
 });

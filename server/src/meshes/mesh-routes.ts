@@ -1,8 +1,9 @@
 import { createHash } from 'node:crypto';
 import { Router } from 'express';
 import multer from 'multer';
+import { Op, type Transaction } from 'sequelize';
 import { z } from 'zod';
-import { idSchema, meshSchema } from '@tumblewise/shared';
+import { idSchema, meshSchema, meshUsageSchema, type MeshUsage } from '@tumblewise/shared';
 import type { AppContext } from '../app-context';
 import type { MeshCheckResult } from '../compute/compute-tasks';
 import { recordAudit } from '../audit/audit-log';
@@ -10,7 +11,7 @@ import { AppError } from '../http/app-error';
 import { routeGroup } from '../http/api-route';
 import { membershipOf } from '../http/authenticate';
 import { findInWorkspace } from '../http/find-in-workspace';
-import { Mesh } from '../models/init-models';
+import { Mesh, Part, Variant } from '../models/init-models';
 
 const params = z.object({ meshId: idSchema });
 const uploadFields = z.object({ name: z.string().trim().max(200, { message: 'must be at most 200 characters' }).optional() });
@@ -82,15 +83,69 @@ export function meshRoutes(ctx: AppContext, router: Router): void {
   });
 
   route({
-    method: 'delete', path: '/meshes/:meshId', summary: 'Delete an uploaded mesh.',
-    access: { kind: 'workspace', permission: 'projects.edit' }, params,
-    success: { status: 204, description: 'Deleted.' },
+    method: 'get', path: '/meshes/:meshId/usage', summary: 'The parts that use an uploaded mesh, in their draft or in saved variants; a mesh in use cannot be deleted.',
+    access: { kind: 'workspace', permission: 'workspace.read' }, params,
+    success: { status: 200, description: 'The parts using the mesh, by name (empty when none).', schema: meshUsageSchema },
     handler: async ({ params: p }, req) => {
-      const mesh = await findInWorkspace(Mesh, p.meshId, membershipOf(req).workspaceId, 'Mesh', { attributes: { exclude: ['data'] } });
-      await mesh.destroy();
+      const { workspaceId } = membershipOf(req);
+      const mesh = await findInWorkspace(Mesh, p.meshId, workspaceId, 'Mesh', { attributes: ['id'] });
+      return meshUsage(workspaceId, mesh.id);
+    },
+  });
+
+  route({
+    method: 'delete', path: '/meshes/:meshId',
+    summary: 'Delete an uploaded mesh. A mesh that a part\'s draft or a saved variant uses is kept (409 mesh_in_use, naming the parts): the variants were computed from it and must stay reproducible.',
+    access: { kind: 'workspace', permission: 'projects.edit' }, params, errors: [409],
+    success: { status: 204, description: 'Deleted; the audit trail records it.' },
+    handler: async ({ params: p, auth }, req) => {
+      const { workspaceId } = membershipOf(req);
+      await ctx.sequelize.transaction(async (transaction) => {
+        const mesh = await findInWorkspace(Mesh, p.meshId, workspaceId, 'Mesh', { attributes: { exclude: ['data'] }, transaction, lock: transaction.LOCK.UPDATE });
+        const usage = await meshUsage(workspaceId, mesh.id, transaction);
+        if (usage.parts.length) throw AppError.conflict('mesh_in_use', inUseMessage(mesh.name, usage), 'meshId');
+        await mesh.destroy({ transaction });
+        await recordAudit({
+          workspaceId, actorId: auth!.user.id, action: 'mesh.deleted', targetType: 'mesh', targetId: mesh.id, targetLabel: mesh.name,
+          details: { triangles: mesh.triangleCount, sha256: mesh.sha256 },
+        }, transaction);
+      });
       return undefined;
     },
   });
+}
+
+/** A document (draft or variant) that has a primitive referring to the mesh: JSONB containment, `@>`. */
+const usesMesh = (meshId: string) => ({ [Op.contains]: { primitives: [{ meshId }] } });
+
+/** The workspace's parts whose draft or saved variants refer to the mesh, by part name. */
+export async function meshUsage(workspaceId: string, meshId: string, transaction?: Transaction): Promise<MeshUsage> {
+  const [drafts, variants] = await Promise.all([
+    Part.findAll({ where: { workspaceId, draft: usesMesh(meshId) }, attributes: ['id'], transaction }),
+    Variant.findAll({ where: { workspaceId, document: usesMesh(meshId) }, attributes: ['partId', 'number'], order: [['number', 'ASC']], transaction }),
+  ]);
+  const inDraft = new Set(drafts.map((d) => d.id));
+  const partIds = [...new Set([...inDraft, ...variants.map((v) => v.partId)])];
+  if (!partIds.length) return { parts: [] };
+  const parts = await Part.findAll({ where: { workspaceId, id: partIds }, attributes: ['id', 'projectId', 'name'], order: [['name', 'ASC'], ['id', 'ASC']], transaction });
+  return {
+    parts: parts.map((part) => ({
+      partId: part.id, projectId: part.projectId, partName: part.name, inDraft: inDraft.has(part.id),
+      variantNumbers: variants.filter((v) => v.partId === part.id).map((v) => v.number),
+    })),
+  };
+}
+
+/** Why a mesh in use stays, naming where it is used (the first few parts). */
+export function inUseMessage(meshName: string, usage: MeshUsage): string {
+  const shown = usage.parts.slice(0, 3).map((u) => {
+    const where = [u.inDraft ? 'its draft' : '', u.variantNumbers.length ? `saved ${u.variantNumbers.length === 1 ? 'variant' : 'variants'} ${u.variantNumbers.map((n) => `v${n}`).join(', ')}` : '']
+      .filter(Boolean).join(' and ');
+    return `${u.partName} (${where})`;
+  });
+  const more = usage.parts.length - shown.length;
+  return `The mesh “${meshName}” is still used by ${shown.join('; ')}${more > 0 ? ` and ${more} more ${more === 1 ? 'part' : 'parts'}` : ''}, so it was kept. `
+    + 'Remove it from those drafts, or delete those parts; a saved variant keeps the mesh it was computed from.';
 }
 
 /** A download name for a stored mesh: its name, safe for a header, ending in .stl. */

@@ -14,3 +14,19 @@ export const meshSchema = z.object({
   createdAt: timestampSchema,
 });
 export type Mesh = z.infer<typeof meshSchema>;
+
+/** A part that uses an uploaded mesh: in its autosaved draft, in saved variants, or both. */
+export const meshUserSchema = z.object({
+  partId: idSchema,
+  projectId: idSchema,
+  partName: z.string(),
+  /** The part's draft (what the editor shows) has a primitive with this mesh. */
+  inDraft: z.boolean(),
+  /** Numbers of the part's saved variants that have a primitive with this mesh, ascending. */
+  variantNumbers: z.array(z.number().int()),
+});
+export type MeshUser = z.infer<typeof meshUserSchema>;
+
+/** Where a mesh is used; a mesh with any user cannot be deleted. */
+export const meshUsageSchema = z.object({ parts: z.array(meshUserSchema) });
+export type MeshUsage = z.infer<typeof meshUsageSchema>;

@@ -9,6 +9,7 @@ describe('actionLabel', () => {
     expect(actionLabel('material.deleted')).toBe('Material deleted');
     expect(actionLabel('review.changes_requested')).toBe('Changes requested');
     expect(actionLabel('project.archived')).toBe('Project archived');
+    expect(actionLabel('mesh.deleted')).toBe('Mesh deleted');
   });
 
   it('writes an unknown action from its name instead of showing the raw key', () => {

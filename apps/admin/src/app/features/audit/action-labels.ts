@@ -35,6 +35,7 @@ export const ACTION_LABELS: Record<(typeof AUDIT_ACTIONS)[number], string> & Rec
   'review.changes_requested': 'Changes requested',
   'review.commented': 'Sign-off comment',
   'mesh.uploaded': 'Mesh uploaded',
+  'mesh.deleted': 'Mesh deleted',
   'measurements.imported': 'Measurements imported',
   'measurements.removed': 'Measurements removed',
   'project.archived': 'Project archived',
