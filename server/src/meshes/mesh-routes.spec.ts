@@ -1,6 +1,7 @@
 import request from 'supertest';
 import { AuditEvent, Membership, Mesh, Part, Project, Variant } from '../models/init-models';
-import { inUseMessage, stlFileName } from './mesh-routes';
+import { meshInUseMessage } from '@tumblewise/shared';
+import { stlFileName } from './mesh-routes';
 import { asciiStl, binaryStl, cubeTriangles } from '../test-support/stl-fixtures';
 import { bearer, signUp, startTestApp, type TestApp } from '../test-support/test-app';
 
@@ -212,8 +213,8 @@ describe('deleting an uploaded mesh', () => {
 
   it('names at most three parts in the refusal and counts the rest', () => {
     const user = (n: number) => ({ partId: `p${n}`, projectId: 'x', partName: `Part ${n}`, inDraft: n % 2 === 0, variantNumbers: n === 1 ? [3] : [] });
-    const message = inUseMessage('block.stl', { parts: [1, 2, 4, 6].map(user) });
-    expect(message).toBe('The mesh “block.stl” is still used by Part 1 (saved variant v3); Part 2 (its draft); Part 4 (its draft) and 1 more part, so it was kept. '
+    const message = meshInUseMessage('block.stl', { parts: [1, 2, 4, 6].map(user) });
+    expect(message).toBe('The mesh “block.stl” is still used by Part 1 (saved variant v3); Part 2 (its draft); Part 4 (its draft) and 1 more part, so it cannot be deleted. '
       + 'Remove it from those drafts, or delete those parts; a saved variant keeps the mesh it was computed from.');
   });
 });

@@ -3,7 +3,7 @@ import { Router } from 'express';
 import multer from 'multer';
 import { Op, type Transaction } from 'sequelize';
 import { z } from 'zod';
-import { idSchema, meshSchema, meshUsageSchema, type MeshUsage } from '@tumblewise/shared';
+import { idSchema, meshInUseMessage, meshSchema, meshUsageSchema, type MeshUsage } from '@tumblewise/shared';
 import type { AppContext } from '../app-context';
 import type { MeshCheckResult } from '../compute/compute-tasks';
 import { recordAudit } from '../audit/audit-log';
@@ -103,7 +103,7 @@ export function meshRoutes(ctx: AppContext, router: Router): void {
       await ctx.sequelize.transaction(async (transaction) => {
         const mesh = await findInWorkspace(Mesh, p.meshId, workspaceId, 'Mesh', { attributes: { exclude: ['data'] }, transaction, lock: transaction.LOCK.UPDATE });
         const usage = await meshUsage(workspaceId, mesh.id, transaction);
-        if (usage.parts.length) throw AppError.conflict('mesh_in_use', inUseMessage(mesh.name, usage), 'meshId');
+        if (usage.parts.length) throw AppError.conflict('mesh_in_use', meshInUseMessage(mesh.name, usage), 'meshId');
         await mesh.destroy({ transaction });
         await recordAudit({
           workspaceId, actorId: auth!.user.id, action: 'mesh.deleted', targetType: 'mesh', targetId: mesh.id, targetLabel: mesh.name,
@@ -134,18 +134,6 @@ export async function meshUsage(workspaceId: string, meshId: string, transaction
       variantNumbers: variants.filter((v) => v.partId === part.id).map((v) => v.number),
     })),
   };
-}
-
-/** Why a mesh in use stays, naming where it is used (the first few parts). */
-export function inUseMessage(meshName: string, usage: MeshUsage): string {
-  const shown = usage.parts.slice(0, 3).map((u) => {
-    const where = [u.inDraft ? 'its draft' : '', u.variantNumbers.length ? `saved ${u.variantNumbers.length === 1 ? 'variant' : 'variants'} ${u.variantNumbers.map((n) => `v${n}`).join(', ')}` : '']
-      .filter(Boolean).join(' and ');
-    return `${u.partName} (${where})`;
-  });
-  const more = usage.parts.length - shown.length;
-  return `The mesh “${meshName}” is still used by ${shown.join('; ')}${more > 0 ? ` and ${more} more ${more === 1 ? 'part' : 'parts'}` : ''}, so it was kept. `
-    + 'Remove it from those drafts, or delete those parts; a saved variant keeps the mesh it was computed from.';
 }
 
 /** A download name for a stored mesh: its name, safe for a header, ending in .stl. */

@@ -89,4 +89,20 @@ describe('MeshesApi', () => {
     expect(Array.from(new Uint8Array(bytes!))).toEqual([1, 2, 3]);
     expect(deleted).toBe(true);
   });
+
+  it('asks where a mesh is used, and fails a refused deletion with the server’s 409', () => {
+    let usage: unknown;
+    let failure: unknown;
+    const parts = [{ partId: '22222222-2222-4222-8222-222222222222', projectId: '33333333-3333-4333-8333-333333333333', partName: 'Head core', inDraft: true, variantNumbers: [1] }];
+    api.usage(WS, BLOCK.id).subscribe((u) => (usage = u));
+    backend.expectOne({ method: 'GET', url: `/api/v1/workspaces/ws-1/meshes/${BLOCK.id}/usage` }).flush({ parts });
+    expect(usage).toEqual({ parts });
+    api.delete(WS, BLOCK.id).subscribe({ error: (e) => (failure = e) });
+    backend.expectOne({ method: 'DELETE', url: `/api/v1/workspaces/ws-1/meshes/${BLOCK.id}` }).flush(
+      { error: { code: 'mesh_in_use', message: 'The mesh “block.stl” is still used by Head core (its draft and saved variant v1), so it cannot be deleted.', field: 'meshId' } },
+      { status: 409, statusText: 'Conflict' },
+    );
+    expect(failure).toBeInstanceOf(ApiError);
+    expect(failure).toMatchObject({ status: 409, code: 'mesh_in_use', field: 'meshId' });
+  });
 });

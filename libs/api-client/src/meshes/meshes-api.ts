@@ -1,6 +1,6 @@
 import { HttpClient, HttpEventType, type HttpEvent } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
-import type { Mesh } from '@tumblewise/shared';
+import type { Mesh, MeshUsage } from '@tumblewise/shared';
 import { filter, map, Observable, type OperatorFunction } from 'rxjs';
 import { API_BASE_URL } from '../api-base-url';
 
@@ -48,7 +48,12 @@ export class MeshesApi {
     return this.http.post<Mesh>(this.url(workspaceId), form, { reportProgress: true, observe: 'events' }).pipe(uploadEvents());
   }
 
-  /** Deletes a mesh (designers and up). */
+  /** The parts whose draft or saved variants use the mesh (a mesh in use cannot be deleted). */
+  usage(workspaceId: string, meshId: string): Observable<MeshUsage> {
+    return this.http.get<MeshUsage>(`${this.url(workspaceId, meshId)}/usage`);
+  }
+
+  /** Deletes a mesh (designers and up); a mesh in use fails with 409 `mesh_in_use`, naming the parts. */
   delete(workspaceId: string, meshId: string): Observable<void> {
     return this.http.delete<void>(this.url(workspaceId, meshId));
   }

@@ -5,7 +5,9 @@ import { TestBed } from '@angular/core/testing';
 import { FormControl, ReactiveFormsModule } from '@angular/forms';
 import { MATERIAL_ANIMATIONS } from '@angular/material/core';
 import { AuthState, errorInterceptor } from '@tumblewise/api-client';
-import type { Mesh } from '@tumblewise/shared';
+import type { Mesh, MeshUsage, Role } from '@tumblewise/shared';
+import { Confirmation, type ConfirmRequest } from '@tumblewise/ui';
+import { of } from 'rxjs';
 import { MeshPicker } from './mesh-picker';
 
 // An invented workspace and user.
@@ -32,16 +34,22 @@ class Host {
 
 describe('MeshPicker', () => {
   let backend: HttpTestingController;
+  /** What the confirm dialog was asked, and what the user answers. */
+  let asked: ConfirmRequest[];
+  let answer: boolean;
 
-  async function render(options: { value?: string; disabled?: boolean; meshes?: Mesh[] } = {}) {
+  async function render(options: { value?: string; disabled?: boolean; meshes?: Mesh[]; role?: Role } = {}) {
+    asked = [];
+    answer = true;
     TestBed.configureTestingModule({
       providers: [
         provideHttpClient(withInterceptors([errorInterceptor])),
         provideHttpClientTesting(),
         { provide: MATERIAL_ANIMATIONS, useValue: { animationsDisabled: true } },
+        { provide: Confirmation, useValue: { ask: (r: ConfirmRequest) => (asked.push(r), of(answer)) } },
       ],
     });
-    TestBed.inject(AuthState).setSession(SESSION);
+    TestBed.inject(AuthState).setSession({ ...SESSION, memberships: [{ workspace: HARBOUR_WORKSPACE, role: options.role ?? 'designer' }] });
     backend = TestBed.inject(HttpTestingController);
     const fixture = TestBed.createComponent(Host);
     const host = fixture.componentInstance;
@@ -135,5 +143,90 @@ describe('MeshPicker', () => {
     expect(testId('mesh-upload')).toBeNull();
     expect(testId('mesh-file')).toBeNull();
     expect(testId('field-meshId')).toBeNull();
+  });
+
+  describe('deleting an upload', () => {
+    const usageUrl = (m: Mesh) => `${LIST_URL}/${m.id}/usage`;
+    const rows = (el: HTMLElement) => [...el.querySelectorAll<HTMLElement>('[data-testid="mesh-upload-row"]')];
+    const deleteButton = (el: HTMLElement, name: string) => rows(el).find((r) => r.textContent!.includes(name))!.querySelector<HTMLButtonElement>('[data-testid="mesh-delete"]')!;
+    const note = (el: HTMLElement) => el.querySelector<HTMLElement>('[data-testid="mesh-delete-note"]');
+
+    it('lists the uploads with a delete button each, and deletes one nothing uses after the user confirms', async () => {
+      const { fixture, el, testId } = await render();
+      expect(rows(el).map((r) => r.querySelector('.tw-mesh-upload-name')!.textContent!.trim())).toEqual(['club-head · 12,800 triangles · 640 kB', 'knob · 12 triangles · 684 B']);
+      expect(deleteButton(el, 'knob').getAttribute('aria-label')).toBe('Delete the mesh knob');
+      expect(testId('mesh-manage')!.textContent).toContain('uploads (2)');
+      deleteButton(el, 'knob').click();
+      backend.expectOne({ method: 'GET', url: usageUrl(KNOB) }).flush({ parts: [] } satisfies MeshUsage);
+      backend.expectOne({ method: 'DELETE', url: `${LIST_URL}/${KNOB.id}` }).flush(null, { status: 204, statusText: 'No Content' });
+      expect(asked).toHaveLength(1);
+      expect(asked[0]).toMatchObject({ title: 'Delete the mesh “knob”?', confirmLabel: 'Delete mesh', destructive: true });
+      expect(asked[0].message).toContain('No part’s draft or saved variant uses it');
+      expect(asked[0].message).toContain('the audit log records the deletion');
+      TestBed.tick();
+      // The list is fetched again after the deletion.
+      backend.expectOne({ method: 'GET', url: LIST_URL }).flush([HEAD]);
+      await fixture.whenStable();
+      expect(note(el)!.textContent!.trim()).toBe('Deleted the mesh “knob”.');
+      expect(note(el)!.getAttribute('role')).toBe('status');
+      expect(rows(el)).toHaveLength(1);
+    });
+
+    it('deletes nothing when the user cancels', async () => {
+      const { fixture, el } = await render();
+      answer = false;
+      deleteButton(el, 'knob').click();
+      backend.expectOne({ method: 'GET', url: usageUrl(KNOB) }).flush({ parts: [] } satisfies MeshUsage);
+      await fixture.whenStable();
+      expect(asked).toHaveLength(1);
+      backend.expectNone({ method: 'DELETE', url: `${LIST_URL}/${KNOB.id}` });
+      expect(note(el)).toBeNull();
+      expect(deleteButton(el, 'knob').disabled).toBe(false);
+    });
+
+    it('says which parts still use a mesh, and neither asks nor deletes', async () => {
+      const { fixture, el } = await render();
+      deleteButton(el, 'knob').click();
+      const usage: MeshUsage = { parts: [{ partId: '33333333-3333-4333-8333-333333333333', projectId: '44444444-4444-4444-8444-444444444444', partName: 'Head core', inDraft: true, variantNumbers: [1, 2] }] };
+      backend.expectOne({ method: 'GET', url: usageUrl(KNOB) }).flush(usage);
+      await fixture.whenStable();
+      expect(asked).toHaveLength(0);
+      expect(note(el)!.textContent).toContain('“knob” is still used by Head core (its draft and saved variants v1, v2), so it cannot be deleted.');
+      expect(note(el)!.getAttribute('role')).toBe('alert');
+      expect(rows(el)).toHaveLength(2);
+    });
+
+    it('does not offer to delete the mesh this primitive uses (its draft may not be saved yet)', async () => {
+      const { fixture, el } = await render({ value: HEAD.id });
+      deleteButton(el, 'club-head').click();
+      await fixture.whenStable();
+      backend.expectNone(usageUrl(HEAD));
+      expect(asked).toHaveLength(0);
+      expect(note(el)!.textContent).toContain('“club-head” is the mesh of this primitive');
+    });
+
+    it('shows the server’s refusal when a draft started using the mesh meanwhile', async () => {
+      const { fixture, el } = await render();
+      deleteButton(el, 'knob').click();
+      backend.expectOne({ method: 'GET', url: usageUrl(KNOB) }).flush({ parts: [] } satisfies MeshUsage);
+      backend.expectOne({ method: 'DELETE', url: `${LIST_URL}/${KNOB.id}` }).flush(
+        { error: { code: 'mesh_in_use', message: 'The mesh “knob” is still used by Grip trial (its draft), so it cannot be deleted.', field: 'meshId' } },
+        { status: 409, statusText: 'Conflict' },
+      );
+      await fixture.whenStable();
+      expect(note(el)!.textContent).toContain('still used by Grip trial (its draft)');
+      expect(rows(el)).toHaveLength(2);
+    });
+
+    it('offers no deletion to reviewers', async () => {
+      const readonly = await render({ value: HEAD.id, disabled: true, role: 'reviewer' });
+      expect(readonly.testId('mesh-manage')).toBeNull();
+      expect(readonly.el.querySelector('[data-testid="mesh-delete"]')).toBeNull();
+      TestBed.resetTestingModule();
+      // Even where the control is enabled, the role decides.
+      const enabled = await render({ role: 'reviewer' });
+      expect(enabled.testId('mesh-manage')).toBeNull();
+      expect(enabled.el.querySelector('[data-testid="mesh-delete"]')).toBeNull();
+    });
   });
 });

@@ -1,13 +1,14 @@
 import { ChangeDetectionStrategy, Component, computed, DestroyRef, effect, forwardRef, inject, input, signal, untracked } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { type ControlValueAccessor, FormControl, NG_VALUE_ACCESSOR, ReactiveFormsModule } from '@angular/forms';
-import { MatButton } from '@angular/material/button';
+import { MatButton, MatIconButton } from '@angular/material/button';
 import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { MeshesApi, toApiError, WorkspaceContext } from '@tumblewise/api-client';
-import type { Mesh } from '@tumblewise/shared';
-import { of, type Subscription } from 'rxjs';
+import { meshInUseMessage, type Mesh } from '@tumblewise/shared';
+import { Confirmation } from '@tumblewise/ui';
+import { EMPTY, filter, finalize, map, of, switchMap, type Subscription } from 'rxjs';
 import { fileProblem, meshOptionLabel, uploadFailureMessage, uploadName, uploadProgressView, type UploadProgressView } from './mesh-picker-model';
 
 let nextId = 0;
@@ -17,11 +18,15 @@ let nextId = 0;
  * workspace's meshes by name, triangle count and size, and "Upload STL…", which sends a file to be
  * checked and, once the server accepts it, selects it. A refused file's reason shows at the field;
  * nothing is stored then. Disabled (reviewers), it shows the chosen mesh's name only.
+ *
+ * Designers, admins and owners may also delete an upload from the workspace. The server keeps a mesh
+ * that a part's draft or a saved variant uses (409), so the picker asks first where it is used and
+ * says so instead of offering the deletion; a mesh nothing uses is deleted after a confirmation.
  */
 @Component({
   selector: 'tw-mesh-picker',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatHint, MatError, MatSelect, MatOption, MatButton, MatProgressBar],
+  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatHint, MatError, MatSelect, MatOption, MatButton, MatIconButton, MatProgressBar],
   providers: [{ provide: NG_VALUE_ACCESSOR, useExisting: forwardRef(() => MeshPicker), multi: true }],
   templateUrl: './mesh-picker.html',
   styleUrl: './mesh-picker.scss',
@@ -32,6 +37,7 @@ export class MeshPicker implements ControlValueAccessor {
 
   private readonly api = inject(MeshesApi);
   private readonly workspace = inject(WorkspaceContext);
+  private readonly confirmation = inject(Confirmation);
   protected readonly hintId = `tw-mesh-units-${nextId++}`;
 
   protected readonly value = signal('');
@@ -63,9 +69,17 @@ export class MeshPicker implements ControlValueAccessor {
   protected readonly selectControl = new FormControl('', { nonNullable: true, validators: () => (this.fieldProblem() ? { problem: true } : null) });
   protected readonly label = meshOptionLabel;
 
+  /** Designers, admins and owners may delete uploads (as the server allows). */
+  protected readonly mayDelete = computed(() => this.workspace.can('projects.edit'));
+  /** The mesh whose deletion is being checked, confirmed or sent. */
+  protected readonly deleting = signal<string | null>(null);
+  /** What the last deletion did: deleted, refused (in use) or failed. */
+  protected readonly deleteNote = signal<{ kind: 'deleted' | 'refused' | 'failed'; text: string } | null>(null);
+
   private onChange: (value: string) => void = () => undefined;
   private onTouched: () => void = () => undefined;
   private upload$: Subscription | null = null;
+  private delete$: Subscription | null = null;
 
   constructor() {
     effect(() => {
@@ -75,7 +89,7 @@ export class MeshPicker implements ControlValueAccessor {
         if (problem) this.selectControl.markAsTouched();
       });
     });
-    inject(DestroyRef).onDestroy(() => this.upload$?.unsubscribe());
+    inject(DestroyRef).onDestroy(() => { this.upload$?.unsubscribe(); this.delete$?.unsubscribe(); });
   }
 
   writeValue(value: unknown): void {
@@ -134,6 +148,64 @@ export class MeshPicker implements ControlValueAccessor {
         this.uploadError.set(uploadFailureMessage(toApiError(err)));
       },
     });
+  }
+
+  /**
+   * Deletes an upload from the workspace: asks the server where it is used first; in use, says
+   * where and deletes nothing; else asks to confirm, deletes, and lists the uploads again.
+   */
+  protected deleteMesh(mesh: Mesh): void {
+    const workspaceId = this.workspace.workspaceId();
+    if (!workspaceId || this.disabled() || !this.mayDelete() || this.deleting()) return;
+    this.deleteNote.set(null);
+    // The draft holding this choice may not be saved yet, so the server would not know of it.
+    if (mesh.id === this.value()) {
+      this.deleteNote.set({ kind: 'refused', text: `“${mesh.name}” is the mesh of this primitive, so it cannot be deleted. Choose another mesh here first.` });
+      return;
+    }
+    this.deleting.set(mesh.id);
+    this.delete$ = this.api
+      .usage(workspaceId, mesh.id)
+      .pipe(
+        switchMap((usage) => {
+          if (usage.parts.length) {
+            this.deleteNote.set({ kind: 'refused', text: meshInUseMessage(mesh.name, usage) });
+            return EMPTY;
+          }
+          return this.confirmation
+            .ask({
+              title: `Delete the mesh “${mesh.name}”?`,
+              message: `No part’s draft or saved variant uses it. It is removed from this workspace’s uploads and the audit log records the deletion. This cannot be undone here: to use the shape again, upload the file again.`,
+              confirmLabel: 'Delete mesh',
+              destructive: true,
+            })
+            .pipe(
+              filter(Boolean),
+              switchMap(() => this.api.delete(workspaceId, mesh.id)),
+              map(() => true),
+            );
+        }),
+        finalize(() => this.deleting.set(null)),
+      )
+      .subscribe({
+        next: () => {
+          this.added.update((list) => list.filter((m) => m.id !== mesh.id));
+          this.deleteNote.set({ kind: 'deleted', text: `Deleted the mesh “${mesh.name}”.` });
+          this.list.reload();
+        },
+        error: (err: unknown) => {
+          const fault = toApiError(err);
+          if (fault.status === 404) {
+            this.deleteNote.set({ kind: 'failed', text: `“${mesh.name}” was already deleted; the list shows what is left.` });
+            this.added.update((list) => list.filter((m) => m.id !== mesh.id));
+            this.list.reload();
+          } else if (fault.status === 409) {
+            this.deleteNote.set({ kind: 'refused', text: fault.message });
+          } else {
+            this.deleteNote.set({ kind: 'failed', text: `“${mesh.name}” was not deleted: ${fault.message}` });
+          }
+        },
+      });
   }
 
   private set(id: string): void {
