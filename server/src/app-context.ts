@@ -3,6 +3,7 @@ import type { Sequelize } from 'sequelize';
 import type { AccessTokens } from './accounts/access-tokens';
 import type { Passwords } from './accounts/passwords';
 import type { SignInSessions } from './accounts/sign-in-sessions';
+import type { SignedInUsers } from './accounts/signed-in-users';
 import type { Config } from './config/config';
 import type { ApiCatalogue } from './http/api-catalogue';
 import type { AttemptLimits } from './http/attempt-limits';
@@ -20,6 +21,7 @@ export interface AppContext {
   tokens: AccessTokens;
   passwords: Passwords;
   sessions: SignInSessions;
+  signedIn: SignedInUsers;
   limits: AttemptLimits;
   payment: PaymentProvider;
   compute: ComputePool;

@@ -53,7 +53,7 @@ export function createApp(ctx: AppContext): express.Express {
   api.use(['/analyze', '/simulate'], express.json({ limit: ctx.config.limits.partBody }));
   api.use(express.json({ limit: ctx.config.limits.jsonBody }));
   api.use(cookieParser());
-  api.use(authenticate(ctx.tokens));
+  api.use(authenticate(ctx.tokens, ctx.signedIn));
   api.use(healthRoutes(ctx));
   api.use(docsRoutes(ctx));
   api.use('/auth', authRoutes(ctx));

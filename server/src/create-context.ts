@@ -2,6 +2,7 @@ import pino from 'pino';
 import { AccessTokens } from './accounts/access-tokens';
 import { Passwords } from './accounts/passwords';
 import { SignInSessions } from './accounts/sign-in-sessions';
+import { SignedInUsers } from './accounts/signed-in-users';
 import type { AppContext } from './app-context';
 import { PaymentProvider } from './billing/payment-provider';
 import { ComputePool } from './compute/compute-pool';
@@ -21,6 +22,8 @@ export function createContext(config: Config, options: { logStream?: pino.Destin
   );
   const sequelize = createDatabase(config.databaseUrl);
   Workspace.graceDays = config.billing.graceDays;
+  const signedIn = new SignedInUsers(config.databaseUrl, logger);
+  void signedIn.listen();
   const ctx = {
     config,
     logger,
@@ -28,7 +31,8 @@ export function createContext(config: Config, options: { logStream?: pino.Destin
     mailer: new Mailer(config.mail),
     tokens: new AccessTokens(config.auth),
     passwords: new Passwords(config.auth.bcryptCost),
-    sessions: new SignInSessions(config.auth),
+    sessions: new SignInSessions(config.auth, signedIn),
+    signedIn,
     limits: new AttemptLimits(sequelize, config.limits),
     payment: new PaymentProvider(config.payment),
     compute: new ComputePool(),
@@ -42,5 +46,5 @@ export function createContext(config: Config, options: { logStream?: pino.Destin
 export async function closeContext(ctx: AppContext): Promise<void> {
   ctx.mailer.close();
   await ctx.scatter.stop();
-  await Promise.all([ctx.sequelize.close(), ctx.compute.close()]);
+  await Promise.all([ctx.sequelize.close(), ctx.compute.close(), ctx.signedIn.close()]);
 }

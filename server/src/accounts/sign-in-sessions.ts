@@ -3,13 +3,14 @@ import type { Config } from '../config/config';
 import { AppError } from '../http/app-error';
 import { RefreshToken, SignInSession, User } from '../models/init-models';
 import { hashToken, newSecureToken } from './secure-token';
+import type { SignedInUsers } from './signed-in-users';
 
 /**
  * Sign-in sessions and their refresh tokens. Every refresh rotates the token; presenting a token
  * that was already rotated means it was copied, so the whole session (token family) is revoked.
  */
 export class SignInSessions {
-  constructor(private readonly config: Config['auth']) {}
+  constructor(private readonly config: Config['auth'], private readonly signedIn?: SignedInUsers) {}
 
   /** Starts a session; returns it with its first refresh token (plain, for the cookie). */
   async start(userId: string, userAgent: string | undefined, transaction?: Transaction): Promise<{ sessionId: string; refreshToken: string }> {
@@ -45,11 +46,15 @@ export class SignInSessions {
 
   async revoke(sessionId: string, reason: string): Promise<void> {
     await SignInSession.update({ revokedAt: new Date(), revokedReason: reason }, { where: { id: sessionId, revokedAt: { [Op.is]: null } } });
+    // The database announces it to every process; this one need not wait for the notice.
+    this.signedIn?.forgetSession(sessionId);
   }
 
   /** Ends every session of a user (after a password reset). */
   async revokeAllOf(userId: string, reason: string, transaction?: Transaction): Promise<void> {
     await SignInSession.update({ revokedAt: new Date(), revokedReason: reason }, { where: { userId, revokedAt: { [Op.is]: null } }, transaction });
+    // Forgotten now and again when the announcement arrives at commit (a lookup meanwhile is not kept).
+    this.signedIn?.forgetUser(userId);
   }
 
   private async issueToken(sessionId: string, transaction?: Transaction): Promise<string> {

@@ -7,6 +7,7 @@ import * as rateLimits from './migrations/20261201-0004-rate-limits';
 import * as designWorkspace from './migrations/20261201-0005-design-workspace';
 import * as billing from './migrations/20261201-0006-billing';
 import * as measurementImports from './migrations/20261201-0007-measurement-imports';
+import * as authChangeNotices from './migrations/20261202-0008-auth-change-notices';
 
 /** Migrations in the order they run. Migrations are history: never edit one that landed, add one. */
 const MIGRATIONS = [
@@ -17,6 +18,7 @@ const MIGRATIONS = [
   { name: '20261201-0005-design-workspace', module: designWorkspace },
   { name: '20261201-0006-billing', module: billing },
   { name: '20261201-0007-measurement-imports', module: measurementImports },
+  { name: '20261202-0008-auth-change-notices', module: authChangeNotices },
 ];
 
 export interface Migration {

@@ -1,5 +1,6 @@
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import type { AccessTokens } from '../accounts/access-tokens';
+import type { SignedInUsers } from '../accounts/signed-in-users';
 import { Membership, User, Workspace } from '../models/init-models';
 import { AppError } from './app-error';
 import { idSchema } from '@tumblewise/shared';
@@ -14,32 +15,24 @@ export type AuthedRequest = Request & { auth?: RequestAuth; membership?: Members
 
 /**
  * Reads `Authorization: Bearer …`. No header: the request goes on unsigned (routes decide).
- * A bad, expired or revoked token: 401. The session is looked up in PostgreSQL on every request,
- * so a sign-out takes effect on every server process at once.
+ * A bad, expired or revoked token: 401. The session is checked against PostgreSQL through
+ * `SignedInUsers`, which remembers live sign-ins and forgets them as a revocation commits, on every
+ * server process.
  */
-export function authenticate(tokens: AccessTokens): RequestHandler {
+export function authenticate(tokens: AccessTokens, signedIn: SignedInUsers): RequestHandler {
   return async (req: AuthedRequest, _res: Response, next: NextFunction) => {
     const header = req.headers.authorization;
     if (!header) return next();
     const match = /^Bearer ([A-Za-z0-9_.-]+)$/.exec(header);
     if (!match) throw AppError.unauthorized('Send the access token as "Authorization: Bearer <token>".', 'token_invalid');
     const claims = tokens.verify(match[1]);
-    const user = await signedInUser(claims.sessionId, claims.userId);
+    const user = await signedIn.find(claims.sessionId, claims.userId);
     // Revoked, unknown, or its account deleted (sessions go with their user): signed out.
     if (!user) throw AppError.unauthorized('You have been signed out. Sign in again.', 'session_revoked');
     req.auth = { user, sessionId: claims.sessionId };
     next();
   };
 }
-
-/** The user of a live sign-in session, in one query (it runs on every signed-in request). */
-async function signedInUser(sessionId: string, userId: string): Promise<User | null> {
-  const rows = await User.sequelize!.query<User>(SIGNED_IN_USER, { replacements: { sessionId, userId }, model: User, mapToModel: true });
-  return rows[0] ?? null;
-}
-
-const SIGNED_IN_USER = `SELECT u.* FROM users u JOIN sign_in_sessions s ON s.user_id = u.id
-  WHERE s.id = :sessionId AND u.id = :userId AND s.revoked_at IS NULL LIMIT 1`;
 
 /**
  * Gate of every `/workspaces/:workspaceId/…` route: the caller must be signed in (401) and a
