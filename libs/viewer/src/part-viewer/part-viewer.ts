@@ -48,8 +48,13 @@ export const TUMBLE_SPEEDS = [0.1, 0.25, 0.5, 1] as const;
 /** Range of the misalignment control (degrees). */
 export const MISALIGNMENT_RANGE = { min: 0.1, max: 20 } as const;
 
-/** Pause before asking for a new motion (ms), so a document that changes while the designer types asks once. */
-export const TUMBLE_REQUEST_DELAY_MS = new InjectionToken<number>('TUMBLE_REQUEST_DELAY_MS', { providedIn: 'root', factory: () => 250 });
+/**
+ * Pause in the edits before asking for a new motion (ms). A motion is thousands of samples and
+ * redraws both pictures, so it waits until the designer has stopped typing (keys within a number
+ * come 150–300 ms apart) rather than recomputing between two digits; the spin report itself
+ * follows every keystroke.
+ */
+export const TUMBLE_REQUEST_DELAY_MS = new InjectionToken<number>('TUMBLE_REQUEST_DELAY_MS', { providedIn: 'root', factory: () => 600 });
 
 /** How often the time read-out and slider follow the animation (ms); the pictures move every frame. */
 const READOUT_INTERVAL_MS = 100;
