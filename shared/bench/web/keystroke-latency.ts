@@ -9,6 +9,8 @@ import { quantile } from './percentiles';
 export const KEYSTROKE_TARGET_MS = 150;
 const WARM_UP = 3;
 const MEASURED = 25;
+/** Quiet time after the editor has loaded, before the first keystroke. */
+const SETTLE_MS = 1000;
 
 type ProbeWindow = { __twReportProbe: { samples: unknown[] } };
 type Sample = { domMs: number; frameMs: number; before: string; after: string };
@@ -18,6 +20,7 @@ const byTestId = (page: Page, id: string) => page.locator(`[data-testid="${id}"]
  * Keystroke → updated spin report in the part editor, for a 50-primitive part: the demo designer
  * opens the part in Chromium and retypes the last digit of the plate's thickness (40 → 41 → 42 …,
  * 1 mm ≈ 1 % of the mass); each digit is timed from its keydown to the DOM showing the new mass.
+ * Typing starts once the editor has loaded, its tumble preview included.
  */
 export async function measureKeystrokeLatency(baseUrl: string, table: BenchTable): Promise<Record<string, unknown>> {
   const editorPath = await createBenchPart(baseUrl, await signInDesigner(baseUrl));
@@ -30,6 +33,10 @@ export async function measureKeystrokeLatency(baseUrl: string, table: BenchTable
     await byTestId(page, 'report-mass').waitFor({ timeout: 60_000 });
     await byTestId(page, 'report-loading').waitFor({ state: 'detached' });
     await expectPrimitiveCount(page, 50);
+    // Time the editing, not the page still loading: the tumble preview fetches and draws its first
+    // motion (thousands of samples) after the report; wait until it can play, and a moment more.
+    await page.locator('[data-testid="tumble-play"]:not([disabled])').waitFor({ timeout: 60_000 });
+    await page.waitForTimeout(SETTLE_MS);
 
     await byTestId(page, 'primitive-select').nth(0).click();
     const field = byTestId(page, 'field-size_2');

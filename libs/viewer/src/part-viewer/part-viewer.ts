@@ -35,6 +35,7 @@ import { disposeObject } from '../scene/dispose-object';
 import { MeshGeometryCache } from '../scene/mesh-geometry';
 import { MESH_GEOMETRY_SOURCE } from '../scene/mesh-geometry-source';
 import { buildPartScene, type PartScene, type UploadedMeshStatus } from '../scene/part-scene';
+import { PrimitiveGeometryCache } from '../scene/primitive-geometry-cache';
 import { buildPolhodeScene, type PolhodeScene } from '../scene/polhode-scene';
 import { AXIS_LABELS, AXIS_ROLES, VIEWER_COLOURS } from '../scene/viewer-palette';
 import { ViewerStage, type ViewName } from '../scene/viewer-stage';
@@ -170,6 +171,7 @@ export class TwPartViewer {
   private lastReadoutAt = 0;
   private simTime = 0;
   private readonly scratchQuaternion = new Quaternion();
+  private readonly primitiveGeometries = new PrimitiveGeometryCache();
   private readonly scratchPoint: [number, number, number] = [0, 0, 0];
 
   constructor() {
@@ -313,7 +315,8 @@ export class TwPartViewer {
     if (!stage) return;
     const previousReach = this.partScene?.reach ?? null;
     if (this.partScene) disposeObject(this.partScene.body);
-    this.partScene = buildPartScene(doc, report, (meshId, scale) => this.meshCache.lookup(meshId, scale));
+    this.partScene = buildPartScene(doc, report, (meshId, scale) => this.meshCache.lookup(meshId, scale), this.primitiveGeometries.geometryOf);
+    this.primitiveGeometries.keepOnly();
     stage.scene.add(this.partScene.body);
     this.uploadedMeshStatus.set(this.partScene.uploadedMeshes);
     this.uploadedMeshes.emit(this.partScene.uploadedMeshes);
@@ -377,6 +380,7 @@ export class TwPartViewer {
     this.partStage?.dispose();
     this.polhodeStage?.dispose();
     this.meshCache.dispose();
+    this.primitiveGeometries.dispose();
     this.partStage = this.polhodeStage = null;
     this.partScene = this.polhodeScene = null;
     this.momentumArrow = null;

@@ -1,4 +1,4 @@
-import { Box3, DoubleSide, Group, Matrix4, Mesh, MeshStandardMaterial, SphereGeometry, TorusGeometry, Vector3 } from 'three';
+import { Box3, type BufferGeometry, DoubleSide, Group, Matrix4, Mesh, MeshStandardMaterial, SphereGeometry, TorusGeometry, Vector3 } from 'three';
 import { sharedMaterial } from './shared-materials';
 import type { PartDocument } from '@tumblewise/shared';
 import type { SpinReport } from '@tumblewise/engine';
@@ -37,8 +37,12 @@ export type UploadedMeshLookup = (meshId: string, scale: number) => MeshGeometry
  * as rods coloured by role, and the intended spin axis as a dark rod with a ring around it.
  * Uploaded meshes come from `uploaded` (times their `scale`, drawn two-sided since a file's facing
  * is its own); one not at hand yet, or that failed, is left out and listed in `uploadedMeshes`.
+ * `geometryOf` gives each primitive's geometry (a PrimitiveGeometryCache keeps them between drawings).
  */
-export function buildPartScene(doc: PartDocument, report: SpinReport, uploaded?: UploadedMeshLookup): PartScene {
+export function buildPartScene(
+  doc: PartDocument, report: SpinReport, uploaded?: UploadedMeshLookup,
+  geometryOf: (p: PartDocument['primitives'][number]) => BufferGeometry | null = primitiveGeometry,
+): PartScene {
   const body = new Group();
   body.name = 'body';
   const solids = new Group();
@@ -67,7 +71,7 @@ export function buildPartScene(doc: PartDocument, report: SpinReport, uploaded?:
       points.push(marker);
       continue;
     }
-    let geometry = primitiveGeometry(p);
+    let geometry = geometryOf(p);
     let material = p.mode === 'remove' ? removal : solid;
     if (!geometry && p.shape === 'mesh' && p.meshId) {
       const found: MeshGeometryState = uploaded ? uploaded(p.meshId, p.scale ?? 1) : { state: 'failed', message: 'this view has no access to uploaded meshes' };

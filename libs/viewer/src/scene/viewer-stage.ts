@@ -1,6 +1,7 @@
 import { AmbientLight, Color, DirectionalLight, PerspectiveCamera, Scene, Vector3, WebGLRenderer } from 'three';
 import { OrbitControls } from 'three/examples/jsm/controls/OrbitControls.js';
 import { disposeObject } from './dispose-object';
+import { isSoftwareWebGL } from './software-webgl';
 
 /** Named camera directions of the view buttons (part coordinates, z up). */
 export const VIEW_DIRECTIONS = {
@@ -28,7 +29,8 @@ export class ViewerStage {
 
   /** Throws when WebGL cannot start (the caller shows its text alternative instead). */
   constructor(private readonly canvas: HTMLCanvasElement, background: string) {
-    this.renderer = new WebGLRenderer({ canvas, antialias: true, preserveDrawingBuffer: true, powerPreference: 'low-power' });
+    // Smooth edges where a GPU draws; on a CPU renderer multisampling costs more than the drawing.
+    this.renderer = new WebGLRenderer({ canvas, antialias: !isSoftwareWebGL(), preserveDrawingBuffer: true, powerPreference: 'low-power' });
     this.renderer.setPixelRatio(Math.min(globalThis.devicePixelRatio ?? 1, 2));
     this.scene.background = new Color(background);
     this.scene.add(new AmbientLight('#ffffff', 1.2));
