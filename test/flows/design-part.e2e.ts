@@ -165,6 +165,8 @@ it('creates a project and a part, sketches it from three primitives, watches the
   await expectAccessible(page, 'design-08-variant-history');
 
   await page.locator('[data-testid="variant-row"][data-variant-number="1"] [data-testid="variant-open"]').click();
+  // The panel is redrawn on the next change detection after the click: wait for it, then read it.
+  await page.locator('[data-testid="spin-report"][aria-label*="(read-only)"]').waitFor();
   await expect(byTestId(page, 'spin-report').getAttribute('aria-label')).resolves.toMatch(/Variant 1 · Narrow throat \(read-only\)/);
   await page.locator('[data-testid="report-verdict"][data-verdict="flip-prone"]').waitFor();
   await expectAccessible(page, 'design-09-variant-open');

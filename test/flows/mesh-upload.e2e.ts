@@ -3,6 +3,7 @@ import os from 'node:os';
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { accessibilityViolations, baseUrl, openBrowser, screenshot } from '../support/browser';
+import { api } from '../support/flow-helpers';
 
 /**
  * An uploaded STL in the part editor: the demo designer adds a mesh primitive, uploads a file that is
@@ -167,4 +168,43 @@ it('refuses an open STL with the reason at the field, then analyses and draws a 
   await page.waitForTimeout(300);
   expect(await drawnShare(page)).toBeGreaterThan(0.03);
   await expectAccessible(page, 'mesh-04-box-analysed-and-drawn');
+});
+
+it('keeps the upload this primitive uses and deletes one nothing uses, after a confirmation', async () => {
+  const page = browser.page;
+  const copyFile = path.join(dir, 'box-copy.stl');
+  writeFileSync(copyFile, binaryStl(boxTriangles(BOX.a, BOX.b, BOX.c)));
+  await uploadThroughChooser(page, copyFile);
+  await byTestId(page, 'field-meshId').filter({ hasText: 'box-copy' }).waitFor();
+
+  await byTestId(page, 'mesh-manage').locator('summary').click();
+  const row = (name: string) => byTestId(page, 'mesh-upload-row').filter({ hasText: name });
+  await expect(byTestId(page, 'mesh-upload-row').count()).resolves.toBe(2);
+  await row('box-copy').locator('[data-testid="mesh-delete"]').click();
+  await expect(byTestId(page, 'mesh-delete-note').innerText()).resolves.toMatch(/“box-copy” is the mesh of this primitive/);
+
+  // The first box is free once the draft holding the new choice is saved (autosave).
+  const session = await api<{ accessToken: string; memberships: { workspace: { id: string } }[] }>('/auth/signin', null, { body: designer });
+  const workspaceId = session.memberships[0].workspace.id;
+  const meshes = await api<{ id: string; name: string }[]>(`/workspaces/${workspaceId}/meshes`, session.accessToken);
+  const first = meshes.find((m) => m.name === 'box-40x30x200');
+  expect(first).toBeDefined();
+  const deadline = Date.now() + 15_000;
+  for (;;) {
+    const usage = await api<{ parts: unknown[] }>(`/workspaces/${workspaceId}/meshes/${first!.id}/usage`, session.accessToken);
+    if (usage.parts.length === 0) break;
+    if (Date.now() > deadline) throw new Error('the draft still uses the first box after 15 s');
+    await page.waitForTimeout(200);
+  }
+  await row('box-40x30x200').locator('[data-testid="mesh-delete"]').click();
+  const dialog = page.getByRole('dialog');
+  await expect(dialog.innerText()).resolves.toMatch(/Delete the mesh “box-40x30x200”\?/);
+  await expectAccessible(page, 'mesh-05-delete-confirmation');
+  await byTestId(page, 'confirm-accept').click();
+  await byTestId(page, 'mesh-delete-note').filter({ hasText: 'Deleted the mesh “box-40x30x200”.' }).waitFor();
+  await expect(byTestId(page, 'mesh-upload-row').count()).resolves.toBe(1);
+  await expect(byTestId(page, 'field-meshId').innerText()).resolves.toMatch(/box-copy/);
+  const after = await api<{ id: string }[]>(`/workspaces/${workspaceId}/meshes`, session.accessToken);
+  expect(after.some((m) => m.id === first!.id)).toBe(false);
+  await expectAccessible(page, 'mesh-06-upload-deleted');
 });
