@@ -208,3 +208,22 @@ it('keeps the upload this primitive uses and deletes one nothing uses, after a c
   expect(after.some((m) => m.id === first!.id)).toBe(false);
   await expectAccessible(page, 'mesh-06-upload-deleted');
 });
+
+it('shows how much of a slow upload is sent', async () => {
+  const page = browser.page;
+  // 2000 boxes side by side (24 000 triangles, 1.2 MB), sent at 0.4 MB/s: about three seconds of upload.
+  const boxes = Array.from({ length: 2000 }, (_, k) => boxTriangles(BOX.a, BOX.b, BOX.c).map((t) => t.map(([x, y, z]) => [x + (k % 50) * 50, y + Math.floor(k / 50) * 40, z]) as Tri)).flat();
+  const bigFile = path.join(dir, 'box-rack.stl');
+  writeFileSync(bigFile, binaryStl(boxes));
+  const cdp = await page.context().newCDPSession(page);
+  await cdp.send('Network.enable');
+  await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: 400_000 });
+  try {
+    await uploadThroughChooser(page, bigFile);
+    await byTestId(page, 'mesh-progress').filter({ hasText: /Uploading box-rack\.stl… \d+ %/ }).waitFor();
+    await screenshot(page, 'mesh-07-upload-progress');
+  } finally {
+    await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: -1 });
+  }
+  await byTestId(page, 'field-meshId').filter({ hasText: 'box-rack' }).waitFor({ timeout: 30_000 });
+});

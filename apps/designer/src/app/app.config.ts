@@ -1,4 +1,4 @@
-import { provideHttpClient, withFetch, withInterceptors } from '@angular/common/http';
+import { provideHttpClient, withInterceptors } from '@angular/common/http';
 import {
   ApplicationConfig,
   inject,
@@ -17,7 +17,9 @@ export const appConfig: ApplicationConfig = {
     provideBrowserGlobalErrorListeners(),
     provideZonelessChangeDetection(),
     provideRouter(routes, withComponentInputBinding()),
-    provideHttpClient(withFetch(), withInterceptors([authInterceptor, errorInterceptor, workspaceStateInterceptor])),
+    // Angular's default backend, XMLHttpRequest, not withFetch(): only it reports how much of an
+    // upload is sent, and a designer uploads STL files of up to 64 MB.
+    provideHttpClient(withInterceptors([authInterceptor, errorInterceptor, workspaceStateInterceptor])),
     // Restore the session from the refresh cookie before the first route is resolved.
     provideAppInitializer(() => inject(AuthApi).restoreSession()),
     provideLabelledOverlayContainer(),
