@@ -58,7 +58,7 @@ describe('TwPartViewer', () => {
     due.forEach((cb) => cb(now));
   }
 
-  async function open(simulation: SimulationResult | null): Promise<void> {
+  async function open(simulation: SimulationResult | null, requestDelay = 0): Promise<void> {
     renderers.length = 0;
     frameCallbacks = new Map();
     nextFrameId = 1;
@@ -76,7 +76,7 @@ describe('TwPartViewer', () => {
         provideHttpClient(withInterceptors([authInterceptor, errorInterceptor])),
         provideHttpClientTesting(),
         { provide: MATERIAL_ANIMATIONS, useValue: { animationsDisabled: true } },
-        { provide: TUMBLE_REQUEST_DELAY_MS, useValue: 0 },
+        { provide: TUMBLE_REQUEST_DELAY_MS, useValue: requestDelay },
       ],
     });
     backend = TestBed.inject(HttpTestingController);
@@ -186,6 +186,26 @@ describe('TwPartViewer', () => {
       second.flush({ error: { code: 'unanalysable', message: 'The part cannot be analysed.' } }, { status: 422, statusText: 'Unprocessable Entity' });
       await settle();
       expect(testId('error-banner')!.textContent).toContain('The part cannot be analysed.');
+  });
+
+  it('shows the spinner only while the motion is computed, not while it waits for the edits to pause', async () => {
+    // Waiting: a still line of text (an animated spinner would repaint the page at every frame).
+    await open(null, 60_000);
+    expect(testId('tumble-waiting')!.textContent).toContain('once you pause');
+    expect(testId('loading')).toBeNull();
+    backend.expectNone('/api/v1/simulate');
+    fixture.destroy();
+    TestBed.resetTestingModule();
+
+    // Asked: the spinner, until the motion is there.
+    await open(null);
+    const request = backend.expectOne('/api/v1/simulate');
+    expect(testId('loading')!.textContent).toContain('Computing the motion');
+    expect(testId('tumble-waiting')).toBeNull();
+    request.flush(SIMULATION);
+    await settle();
+    expect(testId('loading')).toBeNull();
+    expect(testId('tumble-waiting')).toBeNull();
   });
 
   it('frees the renderers and geometries when destroyed', async () => {

@@ -28,7 +28,7 @@ import type { PartDocument } from '@tumblewise/shared';
 import { Cautions, ErrorBanner, LoadingState } from '@tumblewise/ui';
 import { NgxEchartsDirective } from 'ngx-echarts';
 import { Group, Quaternion } from 'three';
-import { of, switchMap, timer } from 'rxjs';
+import { finalize, of, switchMap, timer } from 'rxjs';
 import { provideCharts } from '../charts/provide-charts';
 import { axisRod } from '../scene/axis-rod';
 import { disposeObject } from '../scene/dispose-object';
@@ -136,15 +136,27 @@ export class TwPartViewer {
   protected readonly time = signal(0);
   protected readonly webglError = signal<string | null>(null);
 
+  /** Whether the motion request is on its way (not merely waiting for the edits to pause). */
+  private readonly motionRequested = signal(false);
   private readonly motion = rxResource({
     params: () => ({ document: this.document(), report: this.report(), misalignmentDeg: this.misalignment(), given: this.simulation(), workspaceId: this.workspaceId() }),
     stream: ({ params }) => {
       if (params.given && params.misalignmentDeg === (params.document.spin.misalignmentDeg ?? 1)) return of(params.given);
-      return timer(this.requestDelay).pipe(switchMap(() => this.simulationApi.simulate(tumbleRequest(params.document, params.report, params.misalignmentDeg), params.workspaceId)));
+      return timer(this.requestDelay).pipe(switchMap(() => {
+        this.motionRequested.set(true);
+        return this.simulationApi.simulate(tumbleRequest(params.document, params.report, params.misalignmentDeg), params.workspaceId)
+          .pipe(finalize(() => this.motionRequested.set(false)));
+      }));
     },
   });
   protected readonly track = computed(() => (this.motion.hasValue() ? this.motion.value() : null));
-  protected readonly loadingMotion = this.motion.isLoading;
+  /**
+   * The spinner shows while the motion is being computed, not while the preview waits for the
+   * edits to pause: a spinner running through every pause in typing would keep the page
+   * repainting at the display's rate, which a computer without a GPU does on the CPU.
+   */
+  protected readonly loadingMotion = computed(() => this.motion.isLoading() && this.motionRequested());
+  protected readonly waitingForPause = computed(() => this.motion.isLoading() && !this.motionRequested());
   protected readonly motionError = computed(() => {
     const error = this.motion.error();
     return error ? `The tumble preview could not be computed: ${toApiError(error).message}` : null;
