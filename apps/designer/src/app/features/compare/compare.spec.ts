@@ -5,7 +5,7 @@ import { MATERIAL_ANIMATIONS } from '@angular/material/core';
 import { provideRouter, Router, withComponentInputBinding } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
 import { AuthState, authInterceptor, DOWNLOAD_FETCH, errorInterceptor } from '@tumblewise/api-client';
-import type { Part, Variant, VariantStatus } from '@tumblewise/shared';
+import type { Part, Project, Variant, VariantStatus } from '@tumblewise/shared';
 import { Compare } from './compare';
 
 // Invented workspace, part and figures (UI logic under test, not physics: the reports are minimal
@@ -14,6 +14,7 @@ const WORKSPACE = { id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b', name: 'Harbour S
 const BASE = `/api/v1/workspaces/${WORKSPACE.id}`;
 const PROJECT_ID = '40000000-0000-4000-8000-000000000001';
 const PART_ID = '50000000-0000-4000-8000-000000000001';
+const PROJECT: Project = { id: PROJECT_ID, name: 'Practice rackets', category: 'racket', notes: '', archived: false, createdAt: WORKSPACE.createdAt, updatedAt: WORKSPACE.createdAt };
 const PART = { id: PART_ID, projectId: PROJECT_ID, name: 'Practice racket', draft: null, draftVersion: 1, latestVariant: null, variantCount: 3, createdAt: WORKSPACE.createdAt, updatedAt: WORKSPACE.createdAt } as Part;
 const report = (mass: number, moments: [number, number, number], verdict: string) => ({
   mass, principal: { moments }, spin: { verdict, nearestAxis: verdict === 'flip-prone' ? 'intermediate' : 'major', margins: { major: (moments[0] - moments[1]) / moments[1], minor: (moments[1] - moments[2]) / moments[1] } },
@@ -57,6 +58,7 @@ describe('Compare', () => {
     harness = await RouterTestingHarness.create();
     await harness.navigateByUrl(`/projects/${PROJECT_ID}/parts/${PART_ID}/compare${query}`);
     TestBed.tick();
+    backend.expectOne(`${BASE}/projects/${PROJECT_ID}`).flush(PROJECT);
     backend.expectOne(`${BASE}/parts/${PART_ID}`).flush(PART);
     backend.expectOne(`${BASE}/parts/${PART_ID}/variants`).flush([V1, V2, V3]);
     await harness.fixture.whenStable();
@@ -74,6 +76,9 @@ describe('Compare', () => {
 
   it('compares the variants of the address against its baseline, in display units', async () => {
     await open(`?variants=${V1.id},${V2.id}&baseline=${V1.id}`);
+    // Where the page sits, the project and part by name.
+    expect(Array.from(host.querySelectorAll('nav[aria-label="Breadcrumb"] a, nav[aria-label="Breadcrumb"] [aria-current]')).map((e) => e.textContent!.trim()))
+      .toEqual(['Projects', 'Practice rackets', PART.name, 'Compare variants']);
     const headers = Array.from(host.querySelectorAll('[data-testid="compare-column"]')).map((th) => th.textContent!.replace(/\s+/g, ' ').trim());
     expect(headers).toEqual(['v1 first cut baselinepicture_as_pdf PDF', 'v2 longer throat picture_as_pdf PDF']);
     expect(cells('mass')).toEqual(['250 g', '300 g +50 g (+20 %)']);

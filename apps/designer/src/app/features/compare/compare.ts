@@ -10,6 +10,7 @@ import { buildComparison, type Comparison, type Variant } from '@tumblewise/shar
 import { EmptyState, ErrorBanner, LoadingState, PageHeader, StatusChip } from '@tumblewise/ui';
 import { provideCharts } from '@tumblewise/viewer';
 import { NgxEchartsDirective } from 'ngx-echarts';
+import { Breadcrumbs, partTrail } from '../../core/breadcrumbs';
 import { partPage, variantLabel } from '../../core/part-page';
 import { chartableRows, compareChartOptions, type ChartFigure } from './compare-chart';
 import { formatDelta, formatValue } from './compare-figures';
@@ -26,6 +27,7 @@ export const COMPARE_LIMITS = { min: 2, max: 6 } as const;
   selector: 'tw-compare',
   changeDetection: ChangeDetectionStrategy.OnPush,
   imports: [
+    Breadcrumbs,
     RouterLink,
     MatAnchor,
     MatButton,
@@ -69,8 +71,9 @@ export class Compare {
   protected readonly variantLabel = variantLabel;
 
   /** The part and its variants (the compared ones live in `?variants=`, not `?variant=`). */
-  private readonly page = partPage({ partId: this.partId });
+  private readonly page = partPage({ projectId: this.projectId, partId: this.partId });
   protected readonly part = this.page.part;
+  protected readonly crumbs = computed(() => partTrail(this.projectId(), this.page.project.value()?.name, this.partId(), this.part.value()?.name, 'Compare variants'));
   protected readonly allVariants = this.page.variants;
   protected readonly loadError = this.page.loadError;
   protected readonly list = this.page.list;

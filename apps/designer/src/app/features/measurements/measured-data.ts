@@ -6,11 +6,12 @@ import { MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatTooltip } from '@angular/material/tooltip';
-import { ActivatedRoute, Router, RouterLink } from '@angular/router';
+import { ActivatedRoute, Router } from '@angular/router';
 import { MeasurementsApi, saveBlob, SettingsApi, toApiError, WorkspaceContext } from '@tumblewise/api-client';
 import type { ErrorProblem, Measurement, MeasurementsRemoved } from '@tumblewise/shared';
 import { Confirmation, type ConfirmRequest, EmptyState, ErrorBanner, LoadingState, PageHeader, StatusChip } from '@tumblewise/ui';
 import { filter, type Observable, type Subscription, switchMap } from 'rxjs';
+import { Breadcrumbs, partTrail } from '../../core/breadcrumbs';
 import { partPage, variantLabel } from '../../core/part-page';
 import {
   comparedWith,
@@ -38,7 +39,7 @@ const FALLBACK_UNIT: InertiaUnit = 'g·cm²';
 @Component({
   selector: 'tw-measured-data',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [NgTemplateOutlet, RouterLink, MatButton, MatIconButton, MatTooltip, MatFormField, MatLabel, MatInput, MatProgressBar, PageHeader, StatusChip, EmptyState, ErrorBanner, LoadingState],
+  imports: [NgTemplateOutlet, MatButton, MatIconButton, MatTooltip, MatFormField, MatLabel, MatInput, MatProgressBar, PageHeader, Breadcrumbs, StatusChip, EmptyState, ErrorBanner, LoadingState],
   templateUrl: './measured-data.html',
   styleUrl: './measured-data.scss',
 })
@@ -70,6 +71,7 @@ export class MeasuredData {
   private readonly page = partPage({ projectId: this.projectId, partId: this.partId, variant: this.variant });
   protected readonly project = this.page.project;
   protected readonly part = this.page.part;
+  protected readonly crumbs = computed(() => partTrail(this.projectId(), this.project.value()?.name, this.partId(), this.part.value()?.name, 'Measured data'));
   protected readonly variants = this.page.variants;
   protected readonly list = this.page.list;
   protected readonly chosen = this.page.chosen;

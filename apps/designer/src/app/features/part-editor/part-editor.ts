@@ -1,5 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, DestroyRef, effect, ElementRef, inject, input, signal, untracked, viewChild } from '@angular/core';
 import { rxResource, takeUntilDestroyed, toObservable } from '@angular/core/rxjs-interop';
+import { Breadcrumbs, type Crumb } from '../../core/breadcrumbs';
 import { MatButton, MatIconButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatTooltip } from '@angular/material/tooltip';
@@ -52,6 +53,7 @@ const FIELD_PATH = /^(primitives\[\d+\]\.|spin\.|grip\.|category$|division$)/;
   changeDetection: ChangeDetectionStrategy.OnPush,
   providers: [PartEditorState],
   imports: [
+    Breadcrumbs,
     RouterLink,
     MatButton,
     MatIconButton,
@@ -104,6 +106,11 @@ export class PartEditor {
   });
   protected readonly part = rxResource({ params: this.partScope, stream: ({ params }) => this.partsApi.get(params.workspaceId, params.partId) });
   protected readonly project = rxResource({ params: this.partScope, stream: ({ params }) => this.projectsApi.get(params.workspaceId, params.projectId) });
+  protected readonly crumbs = computed((): Crumb[] => [
+    { label: 'Projects', link: '/', testId: 'crumb-projects' },
+    { label: this.project.value()?.name ?? 'Project', link: ['/projects', this.projectId()], testId: 'crumb-project' },
+    { label: this.part.value()?.name ?? 'Part' },
+  ]);
   protected readonly materials = rxResource({ params: this.workspaceId, stream: ({ params }) => this.materialsApi.list(params), defaultValue: [] as Material[] });
   protected readonly variants = rxResource({ params: this.partScope, stream: ({ params }) => this.variantsApi.list(params.workspaceId, params.partId) });
   protected readonly loadError = computed(() => {

@@ -1,6 +1,7 @@
 import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
+import { Breadcrumbs, type Crumb } from '../../core/breadcrumbs';
 import { MatButton, MatIconButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatTooltip } from '@angular/material/tooltip';
@@ -16,7 +17,7 @@ import { NewPartDialog, type NewPartDialogData } from './new-part-dialog';
 @Component({
   selector: 'tw-project-parts',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [DatePipe, RouterLink, MatButton, MatIconButton, MatTooltip, PageHeader, EmptyState, ErrorBanner, LoadingState, VerdictChip, StatusChip],
+  imports: [DatePipe, RouterLink, MatButton, MatIconButton, MatTooltip, PageHeader, Breadcrumbs, EmptyState, ErrorBanner, LoadingState, VerdictChip, StatusChip],
   templateUrl: './project-parts.html',
   styleUrl: './project-parts.scss',
 })
@@ -37,6 +38,7 @@ export class ProjectParts {
     return workspaceId ? { workspaceId, projectId: this.projectId() } : undefined;
   });
   protected readonly project = rxResource({ params: this.scope, stream: ({ params }) => this.projectsApi.get(params.workspaceId, params.projectId) });
+  protected readonly crumbs = computed((): Crumb[] => [{ label: 'Projects', link: '/', testId: 'crumb-projects' }, { label: this.project.value()?.name ?? 'Project' }]);
   protected readonly parts = rxResource({ params: this.scope, stream: ({ params }) => this.partsApi.list(params.workspaceId, params.projectId) });
   protected readonly loadError = computed(() => {
     const error = this.project.error() ?? this.parts.error();

@@ -6,7 +6,7 @@ import { provideRouter, withComponentInputBinding } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
 import { AuthState, authInterceptor, errorInterceptor } from '@tumblewise/api-client';
 import { runScatterStudy } from '@tumblewise/engine';
-import type { Material, Part, PartDocument, Role, ScatterStudy, Variant } from '@tumblewise/shared';
+import type { Material, Part, Project, PartDocument, Role, ScatterStudy, Variant } from '@tumblewise/shared';
 import { SCATTER_POLL_MS, ScatterStudyPage } from './scatter-study';
 
 // Invented workspace, part and material; the study's result is computed by the engine here.
@@ -15,6 +15,7 @@ const BASE = `/api/v1/workspaces/${WORKSPACE.id}`;
 const PROJECT_ID = '40000000-0000-4000-8000-000000000001';
 const PART_ID = '50000000-0000-4000-8000-000000000001';
 const STUDY_ID = '90000000-0000-4000-8000-000000000001';
+const PROJECT: Project = { id: PROJECT_ID, name: 'Practice batons', category: 'juggling', notes: '', archived: false, createdAt: WORKSPACE.createdAt, updatedAt: WORKSPACE.createdAt };
 const PART = { id: PART_ID, projectId: PROJECT_ID, name: 'Practice baton', draft: null, draftVersion: 1, latestVariant: null, variantCount: 1, createdAt: WORKSPACE.createdAt, updatedAt: WORKSPACE.createdAt } as Part;
 const MAPLE = { id: '80000000-0000-4000-8000-000000000002', name: 'Maple (test)', family: 'wood', density: 700, densityTolerance: 0.07, source: 'test', scope: 'library', createdAt: WORKSPACE.createdAt } as Material;
 const DOC = {
@@ -57,6 +58,7 @@ describe('ScatterStudyPage', () => {
     harness = await RouterTestingHarness.create();
     await harness.navigateByUrl(`/projects/${PROJECT_ID}/parts/${PART_ID}/scatter?variant=${VARIANT.id}`);
     TestBed.tick();
+    backend.expectOne(`${BASE}/projects/${PROJECT_ID}`).flush(PROJECT);
     backend.expectOne(`${BASE}/parts/${PART_ID}`).flush(PART);
     backend.expectOne(`${BASE}/parts/${PART_ID}/variants`).flush([VARIANT]);
     backend.expectOne(`${BASE}/materials`).flush([MAPLE]);
@@ -83,6 +85,9 @@ describe('ScatterStudyPage', () => {
 
   it('fills the tolerances from the material and the ±5 % allowance', async () => {
     await open();
+    // Where the page sits, the project and part by name.
+    expect(Array.from(host.querySelectorAll('nav[aria-label="Breadcrumb"] a, nav[aria-label="Breadcrumb"] [aria-current]')).map((e) => e.textContent!.trim()))
+      .toEqual(['Projects', 'Practice batons', PART.name, 'Scatter study']);
     expect(input('scatter-density-shaft').value).toBe('7');
     expect(testId('scatter-source-shaft')!.textContent).toContain('Maple (test)');
     expect(input('scatter-density-knob').value).toBe('5');

@@ -14,6 +14,7 @@ import { applyServerError, EmptyState, ErrorBanner, FieldErrorPipe, focusFirstIn
 import { provideCharts, SERIES_COLOURS, VIEWER_COLOURS } from '@tumblewise/viewer';
 import { NgxEchartsDirective } from 'ngx-echarts';
 import { defer, repeat, takeWhile, type Subscription } from 'rxjs';
+import { Breadcrumbs, partTrail } from '../../core/breadcrumbs';
 import { partPage, variantLabel } from '../../core/part-page';
 import { histogramOptions } from './scatter-charts';
 import { defaultTolerances, SAMPLE_LIMITS, TOLERANCE_LIMITS, tolerancesBody, type ToleranceRow } from './scatter-tolerances';
@@ -52,6 +53,7 @@ type ToleranceGroup = FormGroup<{ densityPercent: FormControl<number | null>; si
   selector: 'tw-scatter-study',
   changeDetection: ChangeDetectionStrategy.OnPush,
   imports: [
+    Breadcrumbs,
     ReactiveFormsModule,
     PercentPipe,
     RouterLink,
@@ -99,8 +101,9 @@ export class ScatterStudyPage {
   protected readonly mayRun = computed(() => this.workspace.can('projects.edit'));
 
   /** The part, its variants and the studied one (of `?variant=`, else the newest). */
-  private readonly page = partPage({ partId: this.partId, variant: this.variant });
+  private readonly page = partPage({ projectId: this.projectId, partId: this.partId, variant: this.variant });
   protected readonly part = this.page.part;
+  protected readonly crumbs = computed(() => partTrail(this.projectId(), this.page.project.value()?.name, this.partId(), this.part.value()?.name, 'Scatter study'));
   protected readonly chosen = this.page.chosen;
   protected readonly variantLabel = variantLabel;
   private readonly materials = rxResource({ params: () => this.workspace.workspaceId() ?? undefined, stream: ({ params }) => this.materialsApi.list(params) });
