@@ -27,4 +27,9 @@ describe('Breadcrumbs', () => {
     const host = render(partTrail('p-1', undefined, 'part-9', undefined, 'Compare variants'));
     expect([...host.querySelectorAll('a')].map((a) => a.textContent!.trim())).toEqual(['Projects', 'Project', 'Part']);
   });
+
+  it('puts one separator between steps, linked or not', () => {
+    const host = render([{ label: 'Projects', link: '/' }, { label: 'Archived' }, { label: 'Old part' }]);
+    expect([...host.querySelector('nav')!.children].map((e) => e.textContent!.trim())).toEqual(['Projects', '›', 'Archived', '›', 'Old part']);
+  });
 });

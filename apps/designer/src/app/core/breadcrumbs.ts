@@ -25,6 +25,8 @@ export interface Crumb {
           <span [attr.aria-current]="last ? 'page' : null" [attr.data-testid]="crumb.testId ?? null">{{ crumb.label }}</span>
         } @else {
           <a [routerLink]="crumb.link" [attr.data-testid]="crumb.testId ?? null">{{ crumb.label }}</a>
+        }
+        @if (!last) {
           <span aria-hidden="true">›</span>
         }
       }

@@ -1,6 +1,5 @@
 import { ChangeDetectionStrategy, Component, computed, DestroyRef, effect, ElementRef, inject, input, signal, untracked, viewChild } from '@angular/core';
 import { rxResource, takeUntilDestroyed, toObservable } from '@angular/core/rxjs-interop';
-import { Breadcrumbs, type Crumb } from '../../core/breadcrumbs';
 import { MatButton, MatIconButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatTooltip } from '@angular/material/tooltip';
@@ -10,6 +9,7 @@ import type { SpinReport } from '@tumblewise/engine';
 import type { Material, Part, PartDocument, PrimitiveShape, Variant, VariantStatus } from '@tumblewise/shared';
 import { EmptyState, ErrorBanner, LoadingState, PageHeader } from '@tumblewise/ui';
 import { defer, filter, map, Subject } from 'rxjs';
+import { Breadcrumbs, type Crumb } from '../../core/breadcrumbs';
 import { SpinReportPanel } from '../spin-report/spin-report-panel';
 import { VariantHistory } from '../variant-history/variant-history';
 import { autosaveDrafts } from './autosave-drafts';
