@@ -4,6 +4,7 @@ const swc = ['@swc/jest', { jsc: { parser: { syntax: 'typescript' }, target: 'es
 const aliases = {
   '^@tumblewise/shared$': '<rootDir>/shared/src/index.ts',
   '^@tumblewise/engine$': '<rootDir>/shared/src/engine/public-api.ts',
+  '^@tumblewise/engine/worker$': '<rootDir>/shared/src/engine/worker-api.ts',
 };
 
 module.exports = {

@@ -50,16 +50,20 @@ export function createApp(ctx: AppContext): express.Express {
   const api = Router();
   // Before the JSON parser: the signature is checked on the raw body.
   api.use(billingWebhookRoutes(ctx));
-  api.use(['/analyze', '/simulate'], express.json({ limit: ctx.config.limits.partBody }));
+  // `/analyze` bodies stay text: a worker thread parses them (analysis-routes.ts).
+  api.use('/analyze', express.text({ type: 'application/json', limit: ctx.config.limits.partBody }));
+  api.use('/simulate', express.json({ limit: ctx.config.limits.partBody }));
   api.use(express.json({ limit: ctx.config.limits.jsonBody }));
   api.use(cookieParser());
   api.use(authenticate(ctx.tokens, ctx.signedIn));
   api.use(healthRoutes(ctx));
+  // Right after health: the live report calls it at nearly every keystroke, and every router
+  // passed on the way costs each request its path matching.
+  api.use(analysisRoutes(ctx));
   api.use(docsRoutes(ctx));
   api.use('/auth', authRoutes(ctx));
   api.use('/invitations', invitationAcceptRoutes(ctx));
   api.use(meRoutes(ctx));
-  api.use(analysisRoutes(ctx));
   api.use('/operator', operatorRoutes(ctx));
 
   const workspace = Router({ mergeParams: true });

@@ -37,6 +37,18 @@ describe('POST /analyze', () => {
     expect((await request(t.app).post('/api/v1/analyze').set(bearer(token)).send({}).expect(400)).body.error.code).toBe('invalid_input');
   });
 
+  it('refuses a body that is not JSON, or not sent as JSON, saying so', async () => {
+    const broken = await request(t.app).post('/api/v1/analyze').set(bearer(token)).set('content-type', 'application/json').send('{"primitives": [').expect(400);
+    expect(broken.body.error).toMatchObject({ code: 'invalid_json', message: 'The request body is not valid JSON.' });
+    const asText = await request(t.app).post('/api/v1/analyze').set(bearer(token)).set('content-type', 'text/plain').send(JSON.stringify(racket)).expect(400);
+    expect(asText.body.error).toMatchObject({ field: 'body', message: expect.stringContaining('application/json') });
+  });
+
+  it('answers the report as JSON with its content type', async () => {
+    const res = await request(t.app).post('/api/v1/analyze').set(bearer(token)).send(racket).expect(200);
+    expect(res.headers['content-type']).toMatch(/^application\/json; charset=utf-8$/);
+  });
+
   it('answers 422 for a well-formed part that cannot be analysed (a removal larger than the solid)', async () => {
     const part = {
       name: 'Hollowed to nothing',
@@ -106,14 +118,13 @@ describe('a client that goes away', () => {
   });
 
   it('lets an analysis it gave up on finish on the same worker thread, and answers cancelled', async () => {
-    const pool = (t.ctx.compute as unknown as { pool: { threads: { threadId: number }[] } }).pool;
-    // Thousands of primitives: tens of milliseconds of schema checks on the worker, so the client leaves while it runs
-    // (a small part is analysed on the event loop and never reaches a worker).
+    const pool = (t.ctx.compute as unknown as { analyses: { threads: { threadId: number }[] } }).analyses;
+    // Thousands of primitives: tens of milliseconds of parsing and schema checks on the worker, so the client leaves while it runs.
     const big = { ...racket, primitives: Array.from({ length: 5000 }, (_, i) => ({ id: `s${i}`, shape: 'sphere', radius: 0.01, density: 500, position: [0, 0, i * 0.001] })) };
     await request(t.app).post('/api/v1/analyze').set(bearer(token)).send(big).expect(200);
     const before = pool.threads.map((w) => w.threadId);
     expect(before.length).toBeGreaterThan(0);
-    const run = jest.spyOn(t.ctx.compute, 'run');
+    const run = jest.spyOn(t.ctx.compute, 'analyzeJson');
     const req = post('/api/v1/analyze', big);
     req.on('error', () => undefined);
     while (run.mock.calls.length === 0) await new Promise((r) => setTimeout(r, 5));
@@ -125,7 +136,7 @@ describe('a client that goes away', () => {
   });
 
   it('cancels nothing that was answered, however many requests one kept-alive connection carries', async () => {
-    const run = jest.spyOn(t.ctx.compute, 'run');
+    const run = jest.spyOn(t.ctx.compute, 'analyzeJson');
     const warnings: string[] = [];
     const onWarning = (w: Error) => warnings.push(w.name);
     process.on('warning', onWarning);
@@ -143,7 +154,7 @@ describe('a client that goes away', () => {
     await new Promise((r) => setTimeout(r, 100));
     process.off('warning', onWarning);
     expect(run).toHaveBeenCalledTimes(15);
-    expect(run.mock.calls.map(([, signal]) => signal?.aborted)).toEqual(Array(15).fill(false));
+    expect(run.mock.calls.map(([, , signal]) => signal?.aborted)).toEqual(Array(15).fill(false));
     expect(warnings).not.toContain('MaxListenersExceededWarning');
   });
 });

@@ -1,8 +1,8 @@
 import type { MessagePort } from 'node:worker_threads';
 import {
-  analyzePart, EngineInputError, meshMassProperties, parseStl, runScatterStudy, simulate,
+  analyzePart, analyzeValidatedPart, EngineInputError, meshMassProperties, parseStl, runScatterStudy, simulate, validatePartDocument,
   type InputIssue, type MeshProblem, type PartResolvers, type ResolvedMaterial, type ResolvedMesh,
-} from '@tumblewise/engine';
+} from '@tumblewise/engine/worker';
 
 /** Materials and meshes a document refers to, loaded by the caller from the database. */
 export interface TaskReferences {
@@ -11,9 +11,22 @@ export interface TaskReferences {
   meshes?: Record<string, Uint8Array>;
 }
 
+/** The stored materials and meshes a part document names, to be looked up in its workspace. */
+export interface ReferenceIds {
+  materialIds: string[];
+  meshIds: string[];
+}
+
 /** Work the pool runs off the event loop. Inputs are untrusted JSON; the engine validates them. */
 export type ComputeTask =
   | { kind: 'analyze'; part: unknown; references?: TaskReferences }
+  /**
+   * A part document as the request body's text: parsed, checked and analysed on the worker, the
+   * report answered as JSON text, so the event loop neither parses nor serialises it. With
+   * `askForReferences`, a document naming stored materials or meshes comes back as
+   * `needs-references` (their ids) for the caller to load and send again as `references`.
+   */
+  | { kind: 'analyze-json'; json: string; references?: TaskReferences; askForReferences?: boolean }
   | { kind: 'simulate'; input: unknown; references?: TaskReferences }
   | { kind: 'check-mesh'; bytes: Uint8Array; maxTriangles: number }
   | { kind: 'scatter'; input: unknown; references?: TaskReferences; progress?: MessagePort };
@@ -29,7 +42,8 @@ export interface MeshCheckResult {
 /** Errors cross the thread boundary as data (class identity does not survive structured clone). */
 export type ComputeOutcome =
   | { ok: true; value: unknown }
-  | { ok: false; kind: 'invalid' | 'unanalysable'; issues: InputIssue[] };
+  | { ok: false; kind: 'invalid' | 'invalid-json' | 'unanalysable'; issues: InputIssue[] }
+  | { ok: false; kind: 'needs-references'; ids: ReferenceIds };
 
 function resolvers(references: TaskReferences | undefined): PartResolvers {
   const materials = references?.materials ?? {};
@@ -56,11 +70,38 @@ function checkMesh(bytes: Uint8Array, maxTriangles: number): MeshCheckResult {
   return { ok: analysis.ok, format: parsed.mesh.format, triangleCount: parsed.mesh.triangleCount, problems };
 }
 
+/** The stored materials and meshes a checked document names (each id once). */
+function referenceIdsOf(doc: { primitives: { materialId?: string; meshId?: string }[] }): ReferenceIds {
+  const materialIds = new Set<string>(), meshIds = new Set<string>();
+  for (const p of doc.primitives) {
+    if (p.materialId !== undefined) materialIds.add(p.materialId);
+    if (p.meshId !== undefined) meshIds.add(p.meshId);
+  }
+  return { materialIds: [...materialIds], meshIds: [...meshIds] };
+}
+
+function analyzeJson(task: Extract<ComputeTask, { kind: 'analyze-json' }>): ComputeOutcome {
+  let doc: unknown;
+  try {
+    doc = JSON.parse(task.json);
+  } catch {
+    return { ok: false, kind: 'invalid-json', issues: [{ path: '', message: 'The request body is not valid JSON.' }] };
+  }
+  const checked = validatePartDocument(doc);
+  if (!checked.ok) return { ok: false, kind: 'invalid', issues: checked.errors };
+  if (task.askForReferences && !task.references) {
+    const ids = referenceIdsOf(checked.value);
+    if (ids.materialIds.length + ids.meshIds.length > 0) return { ok: false, kind: 'needs-references', ids };
+  }
+  return { ok: true, value: JSON.stringify(analyzeValidatedPart(checked.value, resolvers(task.references))) };
+}
+
 /** Runs one task (on a worker thread). */
 export function runComputeTask(task: ComputeTask): ComputeOutcome {
   try {
     switch (task.kind) {
       case 'analyze': return { ok: true, value: analyzePart(task.part, resolvers(task.references)) };
+      case 'analyze-json': return analyzeJson(task);
       case 'simulate': return { ok: true, value: simulate(task.input, resolvers(task.references)) };
       case 'check-mesh': return { ok: true, value: checkMesh(task.bytes, task.maxTriangles) };
       case 'scatter': {

@@ -10,9 +10,8 @@ export function materialIdsOf(doc: unknown): string[] {
   return [...new Set(ids)].filter((id) => /^[0-9a-f-]{36}$/i.test(id)).slice(0, 500);
 }
 
-/** Loads the library and workspace materials a document refers to, for the engine's resolver. */
-export async function materialReferences(workspaceId: string, doc: unknown): Promise<Record<string, ResolvedMaterial>> {
-  const ids = materialIdsOf(doc);
+/** Library materials and this workspace's, by id, for the engine's resolver (unknown ids are left out). */
+export async function materialsById(workspaceId: string, ids: string[]): Promise<Record<string, ResolvedMaterial>> {
   if (ids.length === 0) return {};
   const rows = await Material.findAll({ where: { id: ids, [Op.or]: [{ workspaceId: null }, { workspaceId }] } });
   return Object.fromEntries(rows.map((m) => [m.id, { density: m.density, tolerance: { density: m.densityTolerance } }]));

@@ -1,11 +1,11 @@
-import { convertUnits } from '../units/display-units';
+import { INCH } from '../units/exact-factors';
 import { infoCheck, rangeCheck, type CategoryCheck, type CheckContext } from './category-check';
 import { swingAxis } from './swing-axis';
 
 const OBR = 'Official Baseball Rules 3.02(a) — value from memory';
 const ASTM = 'ASTM F2398, Standard Test Method for Measuring Moment of Inertia and Center of Percussion of a Baseball or Softball Bat';
-const MAX_LENGTH = convertUnits(42, 'inch', 'm');
-const MAX_DIAMETER = convertUnits(2.61, 'inch', 'm');
+const MAX_LENGTH = 42 * INCH;
+const MAX_DIAMETER = 2.61 * INCH;
 
 /** Bat: moment about the pivot and centre of percussion (ASTM F2398), length and diameter limits. */
 export function batChecks(c: CheckContext): CategoryCheck[] {

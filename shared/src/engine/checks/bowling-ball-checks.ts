@@ -1,13 +1,13 @@
 import { radiusOfGyration } from '../trade/trade-figures';
-import { convertUnits } from '../units/display-units';
+import { INCH, POUND } from '../units/exact-factors';
 import { rangeCheck, type CategoryCheck, type CheckContext } from './category-check';
 
 const USBC = 'USBC equipment specifications (bowling balls)';
-const MIN_RG = convertUnits(2.46, 'inch', 'm');
-const MAX_RG = convertUnits(2.8, 'inch', 'm');
-const MAX_DIFFERENTIAL = convertUnits(0.06, 'inch', 'm');
-const MAX_MASS = convertUnits(16, 'lb', 'kg');
-const DIAMETER = [convertUnits(8.5, 'inch', 'm'), convertUnits(8.595, 'inch', 'm')];
+const MIN_RG = 2.46 * INCH;
+const MAX_RG = 2.8 * INCH;
+const MAX_DIFFERENTIAL = 0.06 * INCH;
+const MAX_MASS = 16 * POUND;
+const DIAMETER = [8.5 * INCH, 8.595 * INCH];
 
 /**
  * Bowling ball: radius of gyration (about each principal axis) ≥ 2.460 in, differential (largest

@@ -1,9 +1,9 @@
-import { convertUnits } from '../units/display-units';
+import { CENTIMETRE, GRAM } from '../units/exact-factors';
 import { rangeCheck, type CategoryCheck, type CheckContext } from './category-check';
 
 const PDGA = 'PDGA Technical Standards';
-const MAX_MASS = convertUnits(200, 'g', 'kg');
-const MASS_PER_DIAMETER = convertUnits(8.3, 'g/cm', 'kg/m');
+const MAX_MASS = 200 * GRAM;
+const MASS_PER_DIAMETER = 8.3 * GRAM / CENTIMETRE;
 
 /**
  * Flying disc: diameter 21–40 cm, mass ≤ 200 g and ≤ 8.3 g per cm of diameter; the disc is meant to

@@ -1,9 +1,9 @@
-import { convertUnits } from '../units/display-units';
+import { CENTIMETRE, CUBIC_CENTIMETRE, GRAM } from '../units/exact-factors';
 import { rangeCheck, type CategoryCheck, type CheckContext } from './category-check';
 
 const RULE = 'USGA/R&A Equipment Rules, Part 2 Rule 5, and the governing body\'s clubhead moment-of-inertia test procedure';
-const MAX_MOMENT = convertUnits(5900 + 100, 'g cm^2', 'kg m^2');
-const MAX_VOLUME = convertUnits(460 + 10, 'cc', 'm^3');
+const MAX_MOMENT = (5900 + 100) * GRAM * CENTIMETRE ** 2;
+const MAX_VOLUME = (460 + 10) * CUBIC_CENTIMETRE;
 
 /**
  * Golf wood head: moment about the vertical axis through the centre of gravity ≤ 5900 g·cm² plus the

@@ -1,10 +1,10 @@
-import { convertUnits } from '../units/display-units';
+import { GRAM } from '../units/exact-factors';
 import { rangeCheck, type CategoryCheck, type CheckContext } from './category-check';
 
 const WA = 'World Athletics implement rules (javelin)';
 const LIMITS = {
-  men: { mass: convertUnits(800, 'g', 'kg'), length: [2.6, 2.7], cg: [0.9, 1.06] },
-  women: { mass: convertUnits(600, 'g', 'kg'), length: [2.2, 2.3], cg: [0.8, 0.92] },
+  men: { mass: 800 * GRAM, length: [2.6, 2.7], cg: [0.9, 1.06] },
+  women: { mass: 600 * GRAM, length: [2.2, 2.3], cg: [0.8, 0.92] },
 } as const;
 
 /**

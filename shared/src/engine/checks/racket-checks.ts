@@ -1,10 +1,10 @@
-import { convertUnits } from '../units/display-units';
+import { INCH } from '../units/exact-factors';
 import { infoCheck, rangeCheck, type CategoryCheck, type CheckContext } from './category-check';
 import { swingAxis } from './swing-axis';
 
 const ITF = 'ITF Rules of Tennis, Appendix II (The Racket) — value from memory';
-const MAX_LENGTH = convertUnits(29, 'inch', 'm');
-const MAX_WIDTH = convertUnits(12.5, 'inch', 'm');
+const MAX_LENGTH = 29 * INCH;
+const MAX_WIDTH = 12.5 * INCH;
 
 /** Racket: overall length and width limits; swingweight and twistweight as figures. */
 export function racketChecks(c: CheckContext): CategoryCheck[] {
