@@ -5,6 +5,9 @@ const { createCjsPreset } = require('jest-preset-angular/presets');
 const aliases = {
   '^@tumblewise/shared$': '<rootDir>/shared/src/index.ts',
   '^@tumblewise/engine$': '<rootDir>/shared/src/engine/public-api.ts',
+  '^@tumblewise/engine/stl$': '<rootDir>/shared/src/engine/stl-api.ts',
+  // jsdom has no Worker, and the worker's URL uses import.meta, which these CommonJS tests cannot load.
+  '^\\./mesh-arrays-thread$': '<rootDir>/libs/viewer/src/scene/mesh-arrays-thread.stub.ts',
   '^@tumblewise/api-client$': '<rootDir>/libs/api-client/src/public-api.ts',
   '^@tumblewise/ui$': '<rootDir>/libs/ui/src/public-api.ts',
   '^@tumblewise/viewer$': '<rootDir>/libs/viewer/src/public-api.ts',

@@ -167,6 +167,8 @@ it('refuses an open STL with the reason at the field, then analyses and draws a 
   await expect(viewer.getAttribute('data-meshes-failed')).resolves.toBe('0');
   await page.waitForTimeout(300);
   expect(await drawnShare(page)).toBeGreaterThan(0.03);
+  // The file was read for drawing on the mesh-drawing worker, off the page's main thread.
+  expect(page.workers().map((w) => w.url())).toEqual(expect.arrayContaining([expect.stringMatching(/\/worker-[A-Z0-9]+\.js$/)]));
   await expectAccessible(page, 'mesh-04-box-analysed-and-drawn');
 });
 
@@ -202,6 +204,8 @@ it('keeps the upload this primitive uses and deletes one nothing uses, after a c
   await expectAccessible(page, 'mesh-05-delete-confirmation');
   await byTestId(page, 'confirm-accept').click();
   await byTestId(page, 'mesh-delete-note').filter({ hasText: 'Deleted the mesh “box-40x30x200”.' }).waitFor();
+  // The note shows as the delete is answered; the list follows when it has been fetched again.
+  await row('box-40x30x200').waitFor({ state: 'detached' });
   await expect(byTestId(page, 'mesh-upload-row').count()).resolves.toBe(1);
   await expect(byTestId(page, 'field-meshId').innerText()).resolves.toMatch(/box-copy/);
   const after = await api<{ id: string }[]>(`/workspaces/${workspaceId}/meshes`, session.accessToken);

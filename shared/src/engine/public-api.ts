@@ -1,5 +1,6 @@
 // The mechanics engine's public surface. Nothing else under engine/ is imported from outside, but for
-// worker-api.ts: the same analyses without the display units (mathjs), for the server's compute threads.
+// worker-api.ts (the same analyses without the display units, mathjs, for the server's compute
+// threads) and stl-api.ts (the STL reader alone, for the browser's mesh-drawing worker).
 export { analyzePart, analyzeValidatedPart, type AnalyzeOptions } from './report/analyze-part';
 export type { SpinReport } from './report/spin-report';
 export { STANDARD_NOTES } from './report/report-notes';

@@ -1,5 +1,6 @@
 import { BufferGeometry } from 'three';
 import { CACHED_GEOMETRY, disposeObject } from './dispose-object';
+import { meshArraysFromData, type MeshArrays } from './mesh-arrays';
 import { MeshGeometryCache, meshGeometryFromData, signedVolumeOf } from './mesh-geometry';
 
 // A corner tetrahedron with legs a along x, y and z: its volume is (base a²/2)·(height a)/3 = a³/6
@@ -110,6 +111,45 @@ describe('MeshGeometryCache', () => {
     expect(throwing.lookup('x', 1)).toEqual({ state: 'pending' });
     await flush();
     expect(throwing.lookup('x', 1)).toEqual({ state: 'failed', message: 'no session' });
+  });
+
+  it('answers pending while a build runs off the page, then ready, and draws again when it is', async () => {
+    let finish: () => void = () => undefined;
+    const build = jest.fn((data: ArrayBuffer | Float32Array, scale: number) => new Promise<MeshArrays>((resolve) => (finish = () => resolve(meshArraysFromData(data, scale)))));
+    const changed = jest.fn();
+    const cache = new MeshGeometryCache(async () => binaryStl(tetra(10)), changed, build);
+    cache.lookup('m1', 0.001);
+    await flush();
+    expect(changed).toHaveBeenCalledTimes(1); // the file arrived
+    expect(cache.lookup('m1', 0.001)).toEqual({ state: 'pending' });
+    expect(cache.lookup('m1', 0.001)).toEqual({ state: 'pending' });
+    expect(build).toHaveBeenCalledTimes(1);
+    finish();
+    await flush();
+    expect(changed).toHaveBeenCalledTimes(2); // the arrays arrived
+    const found = cache.lookup('m1', 0.001);
+    if (found.state !== 'ready') throw new Error('expected ready');
+    expect(found.geometry.boundingBox!.max.x).toBeCloseTo(0.01, 7);
+    expect(found.geometry.getAttribute('normal').count).toBe(12);
+  });
+
+  it('answers failed with the reason of a build that fails off the page, and drops builds after dispose', async () => {
+    const failing = new MeshGeometryCache(async () => new ArrayBuffer(8), () => undefined, () => Promise.reject(new Error('the mesh holds no complete triangles')));
+    failing.lookup('m', 1);
+    await flush();
+    failing.lookup('m', 1);
+    await flush();
+    expect(failing.lookup('m', 1)).toEqual({ state: 'failed', message: 'the mesh holds no complete triangles' });
+    let finish: () => void = () => undefined;
+    const changed = jest.fn();
+    const gone = new MeshGeometryCache(async () => binaryStl(tetra(1)), changed, (d, s) => new Promise<MeshArrays>((r) => (finish = () => r(meshArraysFromData(d, s)))));
+    gone.lookup('m', 1);
+    await flush();
+    gone.lookup('m', 1);
+    gone.dispose();
+    finish();
+    await flush();
+    expect(changed).toHaveBeenCalledTimes(1);
   });
 
   it('answers failed at once without a source', () => {

@@ -1,70 +1,28 @@
 import { BufferGeometry, Float32BufferAttribute } from 'three';
-import { STLLoader } from 'three/examples/jsm/loaders/STLLoader.js';
 import { CACHED_GEOMETRY } from './dispose-object';
+import { meshArraysFromData, type MeshArrays } from './mesh-arrays';
+import { MeshArraysBuilder, type MeshArraysBuild } from './mesh-arrays-builder';
 import type { MeshGeometrySource } from './mesh-geometry-source';
+
+export { signedVolumeOf } from './mesh-arrays';
 
 /**
  * A drawable geometry of an uploaded mesh: corner positions times `scale` (file units → metres),
  * turned outward when the file lists its triangles inside out (negative signed volume), with flat
- * normals. Throws an Error saying what is wrong when the data holds no triangles.
+ * normals (see meshArraysFromData). Throws an Error saying what is wrong when the data holds no triangles.
  */
 export function meshGeometryFromData(data: ArrayBuffer | Float32Array, scale: number): BufferGeometry {
-  const positions = data instanceof Float32Array ? Float32Array.from(data) : stlPositions(data);
-  if (positions.length === 0 || positions.length % 9 !== 0) throw new Error('the mesh holds no complete triangles');
-  if (!(Number.isFinite(scale) && scale > 0)) throw new Error('the scale must be a positive number');
-  for (let i = 0; i < positions.length; i++) {
-    const v = positions[i] * scale;
-    if (!Number.isFinite(v)) throw new Error('the mesh has a coordinate that is not a finite number');
-    positions[i] = v;
-  }
-  if (signedVolumeOf(positions) < 0) flipWinding(positions);
+  return meshGeometryFromArrays(meshArraysFromData(data, scale));
+}
+
+/** The geometry of arrays read by meshArraysFromData (here or on the mesh-drawing worker). */
+export function meshGeometryFromArrays(arrays: MeshArrays): BufferGeometry {
   const g = new BufferGeometry();
-  g.setAttribute('position', new Float32BufferAttribute(positions, 3));
-  g.computeVertexNormals();
+  g.setAttribute('position', new Float32BufferAttribute(arrays.positions, 3));
+  g.setAttribute('normal', new Float32BufferAttribute(arrays.normals, 3));
   g.computeBoundingBox();
   g.computeBoundingSphere();
   return g;
-}
-
-/** Corner positions of an STL file (binary or ASCII), as three's STL reader finds them. */
-function stlPositions(bytes: ArrayBuffer): Float32Array {
-  if (bytes.byteLength === 0) throw new Error('the file is empty');
-  let geometry: BufferGeometry;
-  try {
-    geometry = new STLLoader().parse(bytes);
-  } catch {
-    throw new Error('the file could not be read as STL');
-  }
-  const attribute = geometry.getAttribute('position');
-  const positions = attribute ? Float32Array.from(attribute.array as ArrayLike<number>) : new Float32Array(0);
-  geometry.dispose();
-  return positions;
-}
-
-/**
- * Signed volume enclosed by a triangle soup (9 numbers a triangle): the sum of the tetrahedra from
- * the origin to each triangle, v0·(v1 × v2)/6 (divergence theorem). Positive when faces point outward.
- */
-export function signedVolumeOf(positions: ArrayLike<number>): number {
-  let sum = 0;
-  for (let k = 0; k + 8 < positions.length; k += 9) {
-    const ax = positions[k], ay = positions[k + 1], az = positions[k + 2];
-    const bx = positions[k + 3], by = positions[k + 4], bz = positions[k + 5];
-    const cx = positions[k + 6], cy = positions[k + 7], cz = positions[k + 8];
-    sum += ax * (by * cz - bz * cy) + ay * (bz * cx - bx * cz) + az * (bx * cy - by * cx);
-  }
-  return sum / 6;
-}
-
-/** Swaps the second and third corner of every triangle (turns the mesh inside out). */
-function flipWinding(positions: Float32Array): void {
-  for (let k = 0; k + 8 < positions.length; k += 9) {
-    for (let j = 0; j < 3; j++) {
-      const t = positions[k + 3 + j];
-      positions[k + 3 + j] = positions[k + 6 + j];
-      positions[k + 6 + j] = t;
-    }
-  }
 }
 
 /** What the cache knows of one uploaded mesh at one scale. */
@@ -76,18 +34,27 @@ export type MeshGeometryState =
 /**
  * Uploaded meshes for the part scene, fetched once per `meshId` and built once per scale. Asking for
  * a mesh not yet at hand starts the fetch and answers `pending`; when it settles `changed` is called
- * so the viewer draws again. A mesh that cannot be fetched or read answers `failed` with a reason,
- * never throws. `dispose()` frees every geometry and ignores answers still on their way.
+ * so the viewer draws again. Building reads the file on the mesh-drawing worker where there is one
+ * (`MeshArraysBuilder`), and is `pending` meanwhile too. A mesh that cannot be fetched or read
+ * answers `failed` with a reason, never throws. `dispose()` frees every geometry, ends the worker
+ * and ignores answers still on their way.
  */
 export class MeshGeometryCache {
   private readonly data = new Map<string, { state: 'pending' } | { state: 'ready'; data: ArrayBuffer | Float32Array } | { state: 'failed'; message: string }>();
   private readonly built = new Map<string, MeshGeometryState>();
+  private readonly builder: MeshArraysBuilder | null;
+  private readonly build: MeshArraysBuild;
   private disposed = false;
 
+  /** `build` replaces the worker-backed builder (tests). */
   constructor(
     private readonly source: MeshGeometrySource | null,
     private readonly changed: () => void,
-  ) {}
+    build?: MeshArraysBuild,
+  ) {
+    this.builder = build ? null : new MeshArraysBuilder();
+    this.build = build ?? this.builder!.build;
+  }
 
   /** The geometry of `meshId` at `scale`, or where its loading stands. */
   lookup(meshId: string, scale: number): MeshGeometryState {
@@ -102,14 +69,22 @@ export class MeshGeometryCache {
     }
     if (entry.state === 'pending') return entry;
     if (entry.state === 'failed') return entry;
-    let result: MeshGeometryState;
+    let arrays: MeshArrays | Promise<MeshArrays>;
     try {
-      const geometry = meshGeometryFromData(entry.data, scale);
-      geometry.userData[CACHED_GEOMETRY] = true;
-      result = { state: 'ready', geometry };
+      arrays = this.build(entry.data, scale);
     } catch (err) {
-      result = { state: 'failed', message: reasonOf(err) };
+      return this.finish(key, { state: 'failed', message: reasonOf(err) });
     }
+    if (!(arrays instanceof Promise)) return this.finish(key, ready(arrays));
+    this.built.set(key, { state: 'pending' });
+    arrays.then(
+      (a) => { if (!this.disposed) { this.finish(key, ready(a)); this.changed(); } },
+      (err: unknown) => { if (!this.disposed) { this.finish(key, { state: 'failed', message: reasonOf(err) }); this.changed(); } },
+    );
+    return { state: 'pending' };
+  }
+
+  private finish(key: string, result: MeshGeometryState): MeshGeometryState {
     this.built.set(key, result);
     return result;
   }
@@ -117,6 +92,7 @@ export class MeshGeometryCache {
   /** Frees every geometry built; later answers are dropped. */
   dispose(): void {
     this.disposed = true;
+    this.builder?.dispose();
     for (const entry of this.built.values()) if (entry.state === 'ready') entry.geometry.dispose();
     this.built.clear();
     this.data.clear();
@@ -146,6 +122,12 @@ export class MeshGeometryCache {
 /** True for an ArrayBuffer from any realm (a test's or a worker's as well as the page's). */
 function isArrayBuffer(x: unknown): x is ArrayBuffer {
   return Object.prototype.toString.call(x) === '[object ArrayBuffer]';
+}
+
+function ready(arrays: MeshArrays): MeshGeometryState {
+  const geometry = meshGeometryFromArrays(arrays);
+  geometry.userData[CACHED_GEOMETRY] = true;
+  return { state: 'ready', geometry };
 }
 
 function reasonOf(err: unknown): string {
