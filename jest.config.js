@@ -5,6 +5,8 @@ const aliases = {
   '^@tumblewise/shared$': '<rootDir>/shared/src/index.ts',
   '^@tumblewise/engine$': '<rootDir>/shared/src/engine/public-api.ts',
   '^@tumblewise/engine/worker$': '<rootDir>/shared/src/engine/worker-api.ts',
+  // d3-polygon ships ES modules, which these CommonJS tests cannot load, and a UMD build beside them.
+  '^d3-polygon$': '<rootDir>/node_modules/d3-polygon/dist/d3-polygon.js',
 };
 
 module.exports = {

@@ -3,6 +3,7 @@ import {
   analyzePart, analyzeValidatedPart, EngineInputError, meshMassProperties, parseStl, runScatterStudy, simulate, validatePartDocument,
   type InputIssue, type MeshProblem, type PartResolvers, type ResolvedMaterial, type ResolvedMesh,
 } from '@tumblewise/engine/worker';
+import { partDrawing } from '../exports/part-outline';
 
 /** Materials and meshes a document refers to, loaded by the caller from the database. */
 export interface TaskReferences {
@@ -29,6 +30,8 @@ export type ComputeTask =
   | { kind: 'analyze-json'; json: string; references?: TaskReferences; askForReferences?: boolean }
   | { kind: 'simulate'; input: unknown; references?: TaskReferences }
   | { kind: 'check-mesh'; bytes: Uint8Array; maxTriangles: number }
+  /** The side view of a part for its PDF (PartDrawing); uploaded meshes drawn from `references`. */
+  | { kind: 'part-drawing'; document: unknown; references?: TaskReferences }
   | { kind: 'scatter'; input: unknown; references?: TaskReferences; progress?: MessagePort };
 
 /** What a mesh upload learns about the file. */
@@ -104,6 +107,11 @@ export function runComputeTask(task: ComputeTask): ComputeOutcome {
       case 'analyze-json': return analyzeJson(task);
       case 'simulate': return { ok: true, value: simulate(task.input, resolvers(task.references)) };
       case 'check-mesh': return { ok: true, value: checkMesh(task.bytes, task.maxTriangles) };
+      case 'part-drawing': {
+        const meshes = resolvers(task.references);
+        const corners = (id: string) => { const m = meshes.resolveMesh?.(id); return m && m.corners.subarray(0, 9 * m.triangleCount); };
+        return { ok: true, value: partDrawing(task.document, corners) };
+      }
       case 'scatter': {
         let last = 0;
         const value = runScatterStudy(task.input, (done, total) => {

@@ -8,6 +8,8 @@ import { routeGroup } from '../http/api-route';
 import { membershipOf } from '../http/authenticate';
 import { findInWorkspace } from '../http/find-in-workspace';
 import { Part, Project, User, Variant } from '../models/init-models';
+import { taskReferences } from '../compute/task-references';
+import type { PartDrawing } from './part-outline';
 import { spinReportPdf } from './spin-report-pdf';
 
 const variantParams = z.object({ variantId: idSchema });
@@ -74,9 +76,12 @@ export function exportRoutes(ctx: AppContext, router: Router): void {
       const v = await findInWorkspace(Variant, params.variantId, membership.workspaceId, 'Variant', { include: [{ model: User, as: 'author' }] });
       const part = (await Part.findByPk(v.partId))!;
       const project = await Project.findByPk(part.projectId);
+      // Drawn on a compute thread: an uploaded mesh can hold a million triangles.
+      const references = await taskReferences(membership.workspaceId, v.document);
+      const drawing = await ctx.compute.run<PartDrawing>({ kind: 'part-drawing', document: v.document, references });
       const pdf = await spinReportPdf({
         partName: part.name, projectName: project?.name ?? '', workspaceName: membership.workspace.name, number: v.number, label: v.label,
-        status: v.status, author: v.author?.name ?? null, createdAt: v.createdAt, engineVersion: v.engineVersion, document: v.document, report: v.report as SpinReport,
+        status: v.status, author: v.author?.name ?? null, createdAt: v.createdAt, engineVersion: v.engineVersion, drawing, report: v.report as SpinReport,
       });
       res.type('application/pdf').attachment(`${fileName(`${part.name}-v${v.number}`)}-spin-report.pdf`).send(pdf);
       return undefined;

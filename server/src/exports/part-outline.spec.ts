@@ -1,9 +1,13 @@
-import { convexHull, partOutlines } from './part-outline';
+import { cubeTriangles } from '../test-support/stl-fixtures';
+import { convexHull, MAX_OUTLINE_CORNERS, partDrawing, partOutlines } from './part-outline';
 
 describe('part outlines for the PDF drawing', () => {
-  it('the hull of a square and its inner points is the square (counter-clockwise)', () => {
+  it('the hull of a square and its inner points is the square', () => {
     const hull = convexHull([[0, 0], [1, 0], [1, 1], [0, 1], [0.5, 0.5], [0.2, 0.8]]);
-    expect(hull).toEqual([[0, 0], [1, 0], [1, 1], [0, 1]]);
+    expect([...hull].sort()).toEqual([[0, 0], [0, 1], [1, 0], [1, 1]]);
+    // In order around it: the shoelace sum of a simple polygon is ±2 × its area (here 1).
+    const twiceArea = hull.reduce((sum, [x, y], i) => { const [u, v] = hull[(i + 1) % hull.length]; return sum + x * v - u * y; }, 0);
+    expect(Math.abs(twiceArea)).toBeCloseTo(2, 12);
   });
 
   it('projects a cylinder along z, rotated 90° about x, into a rectangle of its length along y', () => {
@@ -21,5 +25,44 @@ describe('part outlines for the PDF drawing', () => {
     expect(outlines.map((o) => [o.id, o.mode])).toEqual([['a', 'add'], ['b', 'remove']]);
     const box = outlines[0];
     expect(Math.max(...box.points.map((p) => p[1]))).toBeCloseTo(1.5, 12);
+  });
+
+  // A box [0,1]×[0,2]×[0,3] in file units, as the triangle corners an uploaded STL gives.
+  const boxCorners = Float32Array.from(cubeTriangles().flat(2).map((c, i) => c * [1, 2, 3][i % 3]));
+
+  it('draws an uploaded mesh from its corners, scaled, rotated and moved like any primitive', () => {
+    // rx = 90° takes local y to part +z and local z to part −y (right-hand rule about x).
+    const doc = { primitives: [{ id: 'm', shape: 'mesh', meshId: 'a', scale: 0.04, rotationDeg: [90, 0, 0], position: [0.5, 0, 0] }] };
+    const [outline] = partOutlines(doc, [1, 0, 0], [0, 1, 0], (id) => (id === 'a' ? boxCorners : undefined));
+    const xs = outline.points.map((p) => p[0]), ys = outline.points.map((p) => p[1]);
+    expect([Math.min(...xs), Math.max(...xs)]).toEqual([expect.closeTo(0.5, 9), expect.closeTo(0.54, 9)]);
+    expect([Math.min(...ys), Math.max(...ys)]).toEqual([expect.closeTo(-0.12, 9), expect.closeTo(0, 9)]);
+  });
+
+  it('leaves out, and counts, an uploaded mesh whose corners are not at hand', () => {
+    const doc = { primitives: [{ id: 'm', shape: 'mesh', meshId: 'gone' }, { id: 'b', shape: 'box', size: [1, 1, 1] }] };
+    const drawing = partDrawing(doc, () => undefined);
+    expect(drawing.outlines.map((o) => o.id)).toEqual(['b']);
+    expect(drawing.meshesLeftOut).toBe(1);
+    expect(partDrawing(doc, () => boxCorners).meshesLeftOut).toBe(0);
+  });
+
+  it('samples a mesh of many corners evenly and keeps its extent', () => {
+    // A fan of 100 000 triangles around a circle of radius 0.1: 300 000 corners.
+    const n = 100_000, corners = new Float32Array(9 * n);
+    for (let i = 0; i < n; i++) {
+      const a = (2 * Math.PI * i) / n, b = (2 * Math.PI * (i + 1)) / n;
+      corners.set([0, 0, 0, 0.1 * Math.cos(a), 0.1 * Math.sin(a), 0, 0.1 * Math.cos(b), 0.1 * Math.sin(b), 0], 9 * i);
+    }
+    const [outline] = partOutlines({ primitives: [{ id: 'fan', shape: 'mesh', meshId: 'f' }] }, [1, 0, 0], [0, 1, 0], () => corners);
+    expect(outline.points.length).toBeGreaterThan(1000);
+    expect(outline.points.length).toBeLessThanOrEqual(MAX_OUTLINE_CORNERS);
+    const xs = outline.points.map((p) => p[0]);
+    expect(Math.max(...xs) - Math.min(...xs)).toBeCloseTo(0.2, 6);
+  });
+
+  it('looks along the grip face normal with the grip axis up, or along part x with z up', () => {
+    expect(partDrawing({ primitives: [], grip: { axis: [0, 1, 0], faceNormal: [0, 0, 1] } })).toMatchObject({ up: [0, 1, 0], right: [1, 0, 0] });
+    expect(partDrawing({ primitives: [] })).toMatchObject({ up: [0, 0, 1], right: [0, 1, 0] });
   });
 });

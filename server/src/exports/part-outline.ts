@@ -1,4 +1,5 @@
-import { rotationFromDegrees } from '@tumblewise/engine';
+import { polygonHull } from 'd3-polygon';
+import { rotationFromDegrees } from '@tumblewise/engine/worker';
 
 /** A primitive's silhouette projected on a drawing plane (convex hull of surface samples), in m. */
 export interface Outline {
@@ -28,8 +29,11 @@ function ring(r: number, z: number, n = 32): Vec[] {
 const num = (v: unknown, fallback = 0) => (typeof v === 'number' && Number.isFinite(v) ? v : fallback);
 const vec = (v: unknown): Vec => (Array.isArray(v) && v.length === 3 ? [num(v[0]), num(v[1]), num(v[2])] : [0, 0, 0]);
 
+/** The triangle corners of an uploaded mesh by its id (file units), or undefined when it is not at hand. */
+export type MeshCorners = (meshId: string) => ArrayLike<number> | undefined;
+
 /** Surface samples in the primitive's local frame (PRODUCT.md frames: symmetry axis local z). */
-function localSamples(p: Prim): Vec[] {
+function localSamples(p: Prim, meshCorners: MeshCorners): Vec[] {
   switch (p.shape) {
     case 'box': { const [a, b, c] = vec(p.size); const pts: Vec[] = []; for (const x of [-a / 2, a / 2]) for (const y of [-b / 2, b / 2]) for (const z of [-c / 2, c / 2]) pts.push([x, y, z]); return pts; }
     case 'cylinder': { const r = num(p.radius), h = num(p.length); return [...ring(r, -h / 2), ...ring(r, h / 2)]; }
@@ -46,28 +50,39 @@ function localSamples(p: Prim): Vec[] {
     }
     case 'capsule': { const r = num(p.radius), h = num(p.length); return sphere(120).map(([x, y, z]) => [r * x, r * y, r * z + (z >= 0 ? h / 2 : -h / 2)]); }
     case 'point': return [[0, 0, 0]];
-    case 'mesh': { const v = p.vertices; return Array.isArray(v) ? v.slice(0, 5000).map((c) => vec(c)).map(([x, y, z]) => [x * num(p.scale, 1), y * num(p.scale, 1), z * num(p.scale, 1)]) : []; }
+    case 'mesh': {
+      const scale = num(p.scale, 1);
+      if (typeof p.meshId === 'string') { const corners = meshCorners(p.meshId); return corners ? cornerSamples(corners, scale) : []; }
+      const v = p.vertices;
+      return Array.isArray(v) ? v.slice(0, 5000).map((c) => vec(c)).map(([x, y, z]) => [x * scale, y * scale, z * scale]) : [];
+    }
     default: return [];
   }
 }
 
-/** Andrew's monotone chain convex hull (Andrew, Inf. Process. Lett. 9(5), 1979). */
+/** The convex hull of points in the plane (d3-polygon: Andrew's monotone chain); fewer than three are kept as they are. */
 export function convexHull(points: [number, number][]): [number, number][] {
-  const pts = [...points].sort((a, b) => a[0] - b[0] || a[1] - b[1]);
-  if (pts.length < 3) return pts;
-  const cross = (o: number[], a: number[], b: number[]) => (a[0] - o[0]) * (b[1] - o[1]) - (a[1] - o[1]) * (b[0] - o[0]);
-  const lower: [number, number][] = [];
-  for (const p of pts) { while (lower.length >= 2 && cross(lower[lower.length - 2], lower[lower.length - 1], p) <= 0) lower.pop(); lower.push(p); }
-  const upper: [number, number][] = [];
-  for (let i = pts.length - 1; i >= 0; i--) { const p = pts[i]; while (upper.length >= 2 && cross(upper[upper.length - 2], upper[upper.length - 1], p) <= 0) upper.pop(); upper.push(p); }
-  return [...lower.slice(0, -1), ...upper.slice(0, -1)];
+  return points.length < 3 ? points : polygonHull(points) ?? points;
+}
+
+/** Most corners of an uploaded mesh taken into its outline; a larger mesh is sampled evenly. */
+export const MAX_OUTLINE_CORNERS = 60_000;
+
+/** Corners of a mesh's triangles (9 numbers a triangle) as points, every k-th when there are many. */
+function cornerSamples(corners: ArrayLike<number>, scale: number): Vec[] {
+  const count = Math.floor(corners.length / 3);
+  const step = Math.max(1, Math.ceil(count / MAX_OUTLINE_CORNERS));
+  const pts: Vec[] = [];
+  for (let i = 0; i < count; i += step) pts.push([corners[3 * i] * scale, corners[3 * i + 1] * scale, corners[3 * i + 2] * scale]);
+  return pts;
 }
 
 /**
  * Silhouettes of every primitive seen along `viewAxis`, drawn with `right` to the right and
- * viewAxis × right upward (both unit, perpendicular). Mesh primitives by uploaded id are skipped.
+ * viewAxis × right upward (both unit, perpendicular). An uploaded mesh is drawn from its corners
+ * as `meshCorners` gives them, and left out when it gives none.
  */
-export function partOutlines(doc: unknown, right: Vec, up: Vec): Outline[] {
+export function partOutlines(doc: unknown, right: Vec, up: Vec, meshCorners: MeshCorners = () => undefined): Outline[] {
   const primitives = (doc as { primitives?: unknown } | null)?.primitives;
   if (!Array.isArray(primitives)) return [];
   const m = new Float64Array(9);
@@ -76,11 +91,38 @@ export function partOutlines(doc: unknown, right: Vec, up: Vec): Outline[] {
     const [rx, ry, rz] = vec(p.rotationDeg);
     rotationFromDegrees(m, rx, ry, rz);
     const [px, py, pz] = vec(p.position);
-    const projected = localSamples(p).map(([x, y, z]) => {
+    const projected = localSamples(p, meshCorners).map(([x, y, z]) => {
       const wx = m[0] * x + m[1] * y + m[2] * z + px, wy = m[3] * x + m[4] * y + m[5] * z + py, wz = m[6] * x + m[7] * y + m[8] * z + pz;
       return [wx * right[0] + wy * right[1] + wz * right[2], wx * up[0] + wy * up[1] + wz * up[2]] as [number, number];
     });
     if (projected.length === 0) return [];
     return [{ id: typeof p.id === 'string' ? p.id : `#${i}`, mode: p.mode === 'remove' ? 'remove' : 'add', points: p.shape === 'point' ? projected : convexHull(projected) } as Outline];
   });
+}
+
+/** The side view the PDF draws: its axes in the part frame and each primitive's outline. */
+export interface PartDrawing {
+  right: Vec;
+  up: Vec;
+  outlines: Outline[];
+  /** Uploaded meshes the document names whose corners were not at hand (left out of the drawing). */
+  meshesLeftOut: number;
+}
+
+/**
+ * The part seen from the side: its long axis up when a grip frame is given (the view looks along
+ * the grip's face normal), else part z up; right = up × face.
+ */
+export function partDrawing(doc: unknown, meshCorners: MeshCorners = () => undefined): PartDrawing {
+  const grip = (doc as { grip?: { axis?: unknown; faceNormal?: unknown } } | null)?.grip;
+  const up: Vec = Array.isArray(grip?.axis) && grip.axis.length === 3 ? vec(grip.axis) : [0, 0, 1];
+  const face: Vec = Array.isArray(grip?.faceNormal) && grip.faceNormal.length === 3 ? vec(grip.faceNormal) : Math.abs(up[0]) < 0.9 ? [1, 0, 0] : [0, 1, 0];
+  const right: Vec = [up[1] * face[2] - up[2] * face[1], up[2] * face[0] - up[0] * face[2], up[0] * face[1] - up[1] * face[0]];
+  let meshesLeftOut = 0;
+  const counted: MeshCorners = (id) => {
+    const corners = meshCorners(id);
+    if (!corners) meshesLeftOut++;
+    return corners;
+  };
+  return { right, up, outlines: partOutlines(doc, right, up, counted), meshesLeftOut };
 }

@@ -1,6 +1,7 @@
+import { readFileSync } from 'node:fs';
 import PDFDocument from 'pdfkit';
 import { toDisplay, type SpinReport } from '@tumblewise/engine';
-import { partOutlines } from './part-outline';
+import type { PartDrawing } from './part-outline';
 
 export interface PdfVariant {
   partName: string;
@@ -12,7 +13,8 @@ export interface PdfVariant {
   author: string | null;
   createdAt: Date;
   engineVersion: string;
-  document: unknown;
+  /** The side view of the part (partDrawing, worked out on a compute thread: meshes can be large). */
+  drawing: PartDrawing;
   report: SpinReport;
 }
 
@@ -21,13 +23,25 @@ const CAUTIONS = [
   'Thrown and swung implements can injure: test prototypes in a cleared area under your organisation’s safety rules.',
 ];
 
-const fmt = (x: number | null | undefined, digits = 4) => (x === null || x === undefined || !Number.isFinite(x) ? '—' : Number(x.toPrecision(digits)).toLocaleString('en-GB'));
+const fmt = (x: number | null | undefined, digits = 4) => {
+  if (x === null || x === undefined || !Number.isFinite(x)) return '—';
+  const text = Number(x.toPrecision(digits)).toLocaleString('en-GB');
+  return text === '-0' ? '0' : text; // a tiny negative axis component rounds to "-0"
+};
 const gcm2 = (x: number | null | undefined) => (x === null || x === undefined ? '—' : `${fmt(toDisplay(x, 'inertia', 'g·cm²'))} g·cm²`);
 const mm = (x: number | null | undefined) => (x === null || x === undefined ? '—' : `${fmt(toDisplay(x, 'length', 'mm'))} mm`);
 
-/** The spin report of one variant as a PDF (pdfkit, its built-in Helvetica: no font download). */
+/**
+ * DejaVu Sans, from the dejavu-fonts-ttf package (read once, embedded as a subset): pdfkit's
+ * built-in Helvetica cannot write ≥, − or λ, which the report uses.
+ */
+let font: Buffer | undefined;
+const reportFont = () => (font ??= readFileSync(require.resolve('dejavu-fonts-ttf/ttf/DejaVuSans.ttf')));
+
+/** The spin report of one variant as a PDF (pdfkit, with DejaVu Sans embedded: no font download). */
 export function spinReportPdf(v: PdfVariant): Promise<Buffer> {
   const doc = new PDFDocument({ size: 'A4', margin: 48, info: { Title: `${v.partName} v${v.number} — spin report`, Author: 'Tumblewise' } });
+  doc.registerFont('report', reportFont()).font('report');
   const chunks: Buffer[] = [];
   doc.on('data', (c: Buffer) => chunks.push(c));
   const done = new Promise<Buffer>((resolve, reject) => { doc.on('end', () => resolve(Buffer.concat(chunks))); doc.on('error', reject); });
@@ -37,8 +51,10 @@ export function spinReportPdf(v: PdfVariant): Promise<Buffer> {
   doc.fillColor(teal).fontSize(20).text(`${v.partName} · v${v.number}${v.label ? ` ${v.label}` : ''}`);
   doc.fillColor('#333').fontSize(10).text(`${v.projectName} · ${v.workspaceName} · status ${v.status.replace('_', ' ')} · ${v.author ?? 'unknown author'} · ${v.createdAt.toISOString().slice(0, 10)} · ${v.engineVersion}`);
   doc.moveDown(0.6);
-  doc.rect(doc.x, doc.y, 499, 46).fillAndStroke('#fff7e6', '#d9a441');
-  doc.fillColor('#5a3d00').fontSize(8.5).text(CAUTIONS.join(' '), doc.x + 8, doc.y + 7, { width: 483 });
+  const cautions = CAUTIONS.join(' ');
+  const cautionHeight = doc.fontSize(8.5).heightOfString(cautions, { width: 483 }) + 14;
+  doc.rect(doc.x, doc.y, 499, cautionHeight).fillAndStroke('#fff7e6', '#d9a441');
+  doc.fillColor('#5a3d00').text(cautions, doc.x + 8, doc.y + 7, { width: 483 });
   doc.x = 48;
   doc.moveDown(1.4);
 
@@ -47,7 +63,7 @@ export function spinReportPdf(v: PdfVariant): Promise<Buffer> {
   doc.fillColor('#222').fontSize(10).text(r.spin.explanation, { width: 499 });
   doc.moveDown(0.6);
 
-  drawPart(doc, v.document, r);
+  drawPart(doc, v.drawing, r);
 
   const table = (title: string, rows: [string, string][]) => {
     doc.moveDown(0.5).fillColor(teal).fontSize(12).text(title).moveDown(0.2);
@@ -94,15 +110,12 @@ export function spinReportPdf(v: PdfVariant): Promise<Buffer> {
 }
 
 /** A side view of the part (long axis up when a grip frame is given), removals dashed. */
-function drawPart(doc: PDFKit.PDFDocument, document: unknown, r: SpinReport): void {
-  const grip = (document as { grip?: { axis?: number[]; faceNormal?: number[] } } | null)?.grip;
-  const up = (grip?.axis?.length === 3 ? grip.axis : [0, 0, 1]) as [number, number, number];
-  const face = (grip?.faceNormal?.length === 3 ? grip.faceNormal : Math.abs(up[0]) < 0.9 ? [1, 0, 0] : [0, 1, 0]) as [number, number, number];
-  // Right = up × face (the view looks along the face normal).
-  const right: [number, number, number] = [up[1] * face[2] - up[2] * face[1], up[2] * face[0] - up[0] * face[2], up[0] * face[1] - up[1] * face[0]];
-  const outlines = partOutlines(document, right, up);
+function drawPart(doc: PDFKit.PDFDocument, { right, up, outlines, meshesLeftOut }: PartDrawing, r: SpinReport): void {
   const all = outlines.flatMap((o) => o.points);
-  if (all.length === 0) return;
+  if (all.length === 0) {
+    if (meshesLeftOut > 0) doc.fillColor('#666').fontSize(7.5).text('No drawing: the uploaded meshes of this part could not be read.');
+    return;
+  }
   const box = { x: 48, y: doc.y, w: 499, h: 170 };
   const [minX, maxX] = [Math.min(...all.map((p) => p[0])), Math.max(...all.map((p) => p[0]))];
   const [minY, maxY] = [Math.min(...all.map((p) => p[1])), Math.max(...all.map((p) => p[1]))];
@@ -122,7 +135,8 @@ function drawPart(doc: PDFKit.PDFDocument, document: unknown, r: SpinReport): vo
   doc.restore();
   doc.x = 48;
   doc.y = box.y + box.h + 6;
-  doc.fillColor('#666').fontSize(7.5).text('Side view, long axis up (part z when there is no grip frame); dashed: removed material; uploaded meshes are not drawn.');
+  const leftOut = meshesLeftOut === 0 ? '' : meshesLeftOut === 1 ? '; one uploaded mesh could not be read and is not drawn' : `; ${meshesLeftOut} uploaded meshes could not be read and are not drawn`;
+  doc.fillColor('#666').fontSize(7.5).text(`Side view, long axis up (part z when there is no grip frame); dashed: removed material${leftOut}.`);
 }
 
 const teal = () => '#0f5c63';

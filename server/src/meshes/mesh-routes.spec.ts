@@ -1,6 +1,7 @@
 import request from 'supertest';
 import { AuditEvent, Membership, Mesh, Part, Project, Variant } from '../models/init-models';
 import { meshInUseMessage } from '@tumblewise/shared';
+import type { PartDrawing } from '../exports/part-outline';
 import { stlFileName } from './mesh-routes';
 import { asciiStl, binaryStl, cubeTriangles } from '../test-support/stl-fixtures';
 import { bearer, signUp, startTestApp, type TestApp } from '../test-support/test-app';
@@ -65,6 +66,20 @@ describe('STL uploads', () => {
     expect(v.body.report.mass).toBeCloseTo(1, 9);
     expect(v.body.report.principal.moments[0]).toBeCloseTo((1 * 0.1 ** 2) / 6, 9);
     expect(await Variant.count({ where: { partId: part.body.id } })).toBe(1);
+
+    // Its PDF draws the mesh: the side view (part z up, looking along x) is the cube's 0.1 m square.
+    const run = jest.spyOn(t.ctx.compute, 'run');
+    const pdf = await request(t.app).get(`${base}/variants/${v.body.id}/export.pdf`).set(bearer(owner.accessToken)).buffer(true).parse(asBytes).expect(200);
+    expect((pdf.body as Buffer).subarray(0, 5).toString()).toBe('%PDF-');
+    const drawing = (await run.mock.results.find((r) => r.type === 'return')!.value) as PartDrawing;
+    run.mockRestore();
+    expect(drawing.meshesLeftOut).toBe(0);
+    const [outline] = drawing.outlines;
+    expect(outline.id).toBe('block');
+    for (const axis of [0, 1]) {
+      const along = outline.points.map((p) => p[axis]);
+      expect(Math.max(...along) - Math.min(...along)).toBeCloseTo(0.1, 6);
+    }
   });
 });
 

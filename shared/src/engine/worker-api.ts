@@ -13,3 +13,4 @@ export type { MeshProblem } from './mesh/mesh-problem';
 export { parseStl } from './mesh/parse-stl';
 export { meshMassProperties } from './mesh/mesh-mass-properties';
 export { runScatterStudy } from './scatter/scatter-study';
+export { rotationFromDegrees } from './linear/rotation-from-degrees';
