@@ -141,7 +141,7 @@ export function runScatterStudy(input: unknown, onProgress?: ScatterProgress, op
   const distributions: Record<string, Distribution> = {};
   names.forEach((n, i) => (distributions[n] = summarize(series[i])));
   const notes = [
-    'Each tolerance is taken as one standard deviation of a normal distribution; density scatter is relative, size scatter absolute (m).',
+    'Each tolerance is taken as one standard deviation of a normal distribution; density scatter is relative (a share of the nominal), size scatter an absolute length.',
     'Figures are engineering estimates from idealised geometry and nominal densities.',
   ];
   if (params.every((q) => q.slot < 0 || q.sigma === 0)) notes.push('No size tolerance was given, so only densities were varied; sensitivities to dimensions are still listed.');

@@ -17,6 +17,7 @@ import { defer, repeat, takeWhile, type Subscription } from 'rxjs';
 import { Breadcrumbs, partTrail } from '../../core/breadcrumbs';
 import { partPage, variantLabel } from '../../core/part-page';
 import { histogramOptions } from './scatter-charts';
+import { percentagePoints, studyFigure } from './scatter-figures';
 import { defaultTolerances, SAMPLE_LIMITS, TOLERANCE_LIMITS, tolerancesBody, type ToleranceRow } from './scatter-tolerances';
 
 /** How long to wait between two looks at a running study (ms). */
@@ -98,6 +99,8 @@ export class ScatterStudyPage {
   protected readonly stateWords = STATE_WORDS;
   protected readonly parameterLabel = parameterLabel;
   protected readonly Math = Math;
+  protected readonly figure = studyFigure;
+  protected readonly points = percentagePoints;
   protected readonly mayRun = computed(() => this.workspace.can('projects.edit'));
 
   /** The part, its variants and the studied one (of `?variant=`, else the newest). */

@@ -7,6 +7,9 @@ export interface Shown {
   unit: string;
 }
 
+/** What a figure the report leaves out (null) shows: a dash, and no unit after it. */
+const NOT_GIVEN: Shown = { value: '—', unit: '' };
+
 /** A number to `digits` significant digits without exponent noise ("13.5", "0.000412", "1.23e+6" only when huge). */
 export function formatFigure(x: number | null | undefined, digits = 4): string {
   if (x === null || x === undefined || !Number.isFinite(x)) return '—';
@@ -21,9 +24,9 @@ export function showMass(kg: number): Shown {
   return { value: formatFigure(toDisplay(kg, 'mass', 'g')), unit: 'g' };
 }
 
-/** Length (m) in millimetres. */
+/** Length (m) in millimetres; a figure the report does not give is a dash without a unit. */
 export function showLength(m: number | null): Shown {
-  return { value: m === null ? '—' : formatFigure(toDisplay(m, 'length', 'mm')), unit: 'mm' };
+  return m === null ? NOT_GIVEN : { value: formatFigure(toDisplay(m, 'length', 'mm')), unit: 'mm' };
 }
 
 /** Volume (m³) in cm³. */
@@ -39,7 +42,7 @@ export function inertiaUnitFor(moments: readonly (number | null)[]): 'kg·cm²' 
 
 /** A moment of inertia (kg·m²) in the given display unit. */
 export function showInertia(kgm2: number | null, unit: 'kg·cm²' | 'g·cm²'): Shown {
-  return { value: kgm2 === null ? '—' : formatFigure(toDisplay(kgm2, 'inertia', unit)), unit };
+  return kgm2 === null ? NOT_GIVEN : { value: formatFigure(toDisplay(kgm2, 'inertia', unit)), unit };
 }
 
 /** A spin rate (rad/s) in revolutions per second. */

@@ -2,7 +2,7 @@ import { TestBed } from '@angular/core/testing';
 import { analyzePart } from '@tumblewise/engine';
 import { unit } from 'mathjs';
 import { SpinReportPanel } from './spin-report-panel';
-import { formatFigure, inertiaUnitFor, showCheck, turnsBeforeFlip } from './report-figures';
+import { formatFigure, inertiaUnitFor, showCheck, showInertia, showLength, turnsBeforeFlip } from './report-figures';
 
 // An invented racket-like part spun about the face-plane axis across the handle: the intermediate
 // principal axis (the "tennis racket" case, common practice), so the engine predicts a flip.
@@ -27,6 +27,13 @@ describe('report figures', () => {
   it('picks kg·cm² from 1 kg·cm² = 1e-4 kg·m² up and g·cm² below', () => {
     expect(inertiaUnitFor([1e-4, 5e-5])).toBe('kg·cm²');
     expect(inertiaUnitFor([9e-5])).toBe('g·cm²');
+  });
+
+  it('shows a figure the report leaves out as a dash with no unit after it', () => {
+    expect(showLength(null)).toEqual({ value: '—', unit: '' });
+    expect(showInertia(null, 'kg·cm²')).toEqual({ value: '—', unit: '' });
+    // 1 mm = 0.001 m (SI).
+    expect(showLength(0.0125)).toEqual({ value: '12.5', unit: 'mm' });
   });
 
   it('shows a check limit in display units (mathjs: 0.7366 m = 736.6 mm)', () => {
