@@ -20,6 +20,8 @@ import type { PartDocument } from '../src/schemas/part-document';
 import { binaryStl, toSoup, torusMesh } from '../src/engine/testing/tessellate';
 import { quatFromMat3 } from '../src/engine/linear/quaternion';
 import { rotationFromDegrees } from '../src/engine/linear/rotation-from-degrees';
+// The upload check's self-intersection search is server code (it uses three.js); measured here beside the other STL figures.
+import { firstSelfIntersection } from '../../server/src/meshes/self-intersection';
 import { partGenerator } from './bench-part';
 import { BenchTable } from './bench-table';
 
@@ -107,6 +109,13 @@ export async function runEngineBench(): Promise<string> {
   const parsed = parseStl(bytes, { target });
   if (!parsed.ok) throw new Error('bench STL refused');
   const validate = medianMicros(() => { meshMassProperties(parsed.mesh); }, 5, 1) / 1e3;
+  const crossing: number[] = [];
+  for (let run = 0; run < 3; run++) {
+    const t0 = process.hrtime.bigint();
+    if (await firstSelfIntersection(torus.vertices, torus.triangles)) throw new Error('bench torus crosses itself');
+    crossing.push(Number(process.hrtime.bigint() - t0) / 1e6);
+  }
+  crossing.sort((x, y) => x - y);
   const a0 = process.hrtime.bigint();
   const rb = world.createRigidBody(RAPIER.RigidBodyDesc.dynamic());
   world.createCollider(RAPIER.ColliderDesc.trimesh(Float32Array.from(torus.vertices), Uint32Array.from(torus.triangles)).setDensity(1), rb);
@@ -117,6 +126,7 @@ export async function runEngineBench(): Promise<string> {
   record('STL: parse only (into a reused buffer)', parseOnly, 'ms');
   record('STL: parse + integration', parseIntegrate, 'ms', `${(parseIntegrate / plain).toFixed(2)}× the plain pass; ${((triangles / parseIntegrate) * 1e3 / 1e6).toFixed(1)} M triangles/s`);
   record('STL: weld + topology check + integration (upload path)', validate, 'ms');
+  record('STL: search for a surface crossing itself (upload path)', crossing[1], 'ms', 'median of 3; three-mesh-bvh');
   record('STL: rapier3d-compat trimesh mass properties', rapierMesh, 'ms', 'one run');
 
   // 4. Simulation steps.

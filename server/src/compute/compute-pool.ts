@@ -88,7 +88,7 @@ export class ComputePool {
     try {
       const transferList = task.kind === 'scatter' && task.progress ? [task.progress] : undefined;
       if (!interruptible(task) && signal?.aborted) throw Object.assign(new Error('The client went away.'), { name: 'AbortError' });
-      const outcome = isSmallAnalysis(task) ? runComputeTask(task)
+      const outcome = isSmallAnalysis(task) ? await runComputeTask(task)
         : interruptible(task) ? await this.interruptibles.run(task, { signal, transferList: transferList as never })
         : await this.analyses.run(task);
       if (!interruptible(task) && signal?.aborted) throw Object.assign(new Error('The client went away.'), { name: 'AbortError' });

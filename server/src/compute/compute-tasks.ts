@@ -1,9 +1,10 @@
 import type { MessagePort } from 'node:worker_threads';
 import {
-  analyzePart, analyzeValidatedPart, EngineInputError, meshMassProperties, parseStl, runScatterStudy, simulate, validatePartDocument,
+  analyzePart, analyzeValidatedPart, EngineInputError, meshMassProperties, parseStl, runScatterStudy, simulate, validatePartDocument, weldVertices,
   type InputIssue, type MeshProblem, type PartResolvers, type ResolvedMaterial, type ResolvedMesh,
 } from '@tumblewise/engine/worker';
 import { partDrawing } from '../exports/part-outline';
+import { firstSelfIntersection, selfIntersectionProblem } from '../meshes/self-intersection';
 
 /** Materials and meshes a document refers to, loaded by the caller from the database. */
 export interface TaskReferences {
@@ -65,12 +66,25 @@ function resolvers(references: TaskReferences | undefined): PartResolvers {
   };
 }
 
-function checkMesh(bytes: Uint8Array, maxTriangles: number): MeshCheckResult {
+/**
+ * Reads, checks and integrates an uploaded STL; a mesh that passes the engine's checks (closed,
+ * consistent, not degenerate) is then searched for a surface that crosses itself.
+ */
+async function checkMesh(bytes: Uint8Array, maxTriangles: number): Promise<MeshCheckResult> {
   const parsed = parseStl(bytes, { maxTriangles, maxBytes: Number.MAX_SAFE_INTEGER });
   if (!parsed.ok) return { ok: false, format: null, triangleCount: 0, problems: parsed.problems };
   const analysis = meshMassProperties(parsed.mesh);
   const problems = [...parsed.problems, ...analysis.problems];
-  return { ok: analysis.ok, format: parsed.mesh.format, triangleCount: parsed.mesh.triangleCount, problems };
+  let ok = analysis.ok;
+  if (ok) {
+    const { vertices, triangles } = weldVertices(parsed.mesh.corners, parsed.mesh.triangleCount);
+    const crossing = await firstSelfIntersection(vertices, triangles);
+    if (crossing) {
+      problems.push(selfIntersectionProblem(crossing));
+      ok = false;
+    }
+  }
+  return { ok, format: parsed.mesh.format, triangleCount: parsed.mesh.triangleCount, problems };
 }
 
 /** The stored materials and meshes a checked document names (each id once). */
@@ -99,14 +113,14 @@ function analyzeJson(task: Extract<ComputeTask, { kind: 'analyze-json' }>): Comp
   return { ok: true, value: JSON.stringify(analyzeValidatedPart(checked.value, resolvers(task.references))) };
 }
 
-/** Runs one task (on a worker thread). */
-export function runComputeTask(task: ComputeTask): ComputeOutcome {
+/** Runs one task (on a worker thread); a mesh check answers a promise (it loads three.js as an ES module). */
+export function runComputeTask(task: ComputeTask): ComputeOutcome | Promise<ComputeOutcome> {
   try {
     switch (task.kind) {
       case 'analyze': return { ok: true, value: analyzePart(task.part, resolvers(task.references)) };
       case 'analyze-json': return analyzeJson(task);
       case 'simulate': return { ok: true, value: simulate(task.input, resolvers(task.references)) };
-      case 'check-mesh': return { ok: true, value: checkMesh(task.bytes, task.maxTriangles) };
+      case 'check-mesh': return checkMesh(task.bytes, task.maxTriangles).then((value) => ({ ok: true, value }));
       case 'part-drawing': {
         const meshes = resolvers(task.references);
         const corners = (id: string) => { const m = meshes.resolveMesh?.(id); return m && m.corners.subarray(0, 9 * m.triangleCount); };

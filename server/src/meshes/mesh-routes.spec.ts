@@ -40,6 +40,7 @@ describe('STL uploads', () => {
     ['open mesh (one face missing)', () => binaryStl(cubeTriangles().slice(0, 10)), 422, /open|boundary|edge/i],
     ['NaN coordinate', () => { const tris = cubeTriangles(); tris[3][1][0] = Number.NaN; return binaryStl(tris); }, 422, /finite|NaN/i],
     ['zero triangles', () => binaryStl([]), 422, /no triangles/],
+    ['two cubes passing through each other', () => binaryStl([...cubeTriangles(), ...cubeTriangles().map((t) => t.map(([x, y, z]) => [x + 0.5, y + 0.3, z + 0.2]) as typeof t)]), 422, /crosses itself \(facets \d+ and \d+/],
     ['not an STL at all', () => Buffer.from('hello, this is a text file'), 422, /neither an ASCII STL/],
     ['over the size limit', () => Buffer.alloc(25000, 1), 413, /too large/],
   ];

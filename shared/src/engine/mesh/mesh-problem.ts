@@ -9,7 +9,8 @@ export type MeshProblemCode =
   | 'open'
   | 'non_manifold'
   | 'inconsistent_orientation'
-  | 'inside_out';
+  | 'inside_out'
+  | 'self_intersecting';
 
 /**
  * One finding. `fixed: true` means the engine repaired it and says so (an inside-out mesh is
