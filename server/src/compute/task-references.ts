@@ -17,6 +17,11 @@ export function taskReferences(workspaceId: string, doc: unknown): Promise<TaskR
   return referencesByIds(workspaceId, { materialIds: materialIdsOf(doc), meshIds: meshIdsOf(doc) });
 }
 
+/** This workspace's stored meshes that a document refers to (no materials), for drawing it. */
+export function meshReferences(workspaceId: string, doc: unknown): Promise<TaskReferences> {
+  return referencesByIds(workspaceId, { materialIds: [], meshIds: meshIdsOf(doc) });
+}
+
 /** Library and workspace materials, and this workspace's stored meshes, by id (unknown ids are left out). */
 export async function referencesByIds(workspaceId: string, ids: ReferenceIds): Promise<TaskReferences> {
   const uuids = (list: string[]) => list.filter((id) => UUID.test(id));

@@ -8,7 +8,7 @@ import { routeGroup } from '../http/api-route';
 import { membershipOf } from '../http/authenticate';
 import { findInWorkspace } from '../http/find-in-workspace';
 import { Part, Project, User, Variant } from '../models/init-models';
-import { taskReferences } from '../compute/task-references';
+import { meshReferences } from '../compute/task-references';
 import type { PartDrawing } from './part-outline';
 import { spinReportPdf } from './spin-report-pdf';
 
@@ -77,7 +77,7 @@ export function exportRoutes(ctx: AppContext, router: Router): void {
       const part = (await Part.findByPk(v.partId))!;
       const project = await Project.findByPk(part.projectId);
       // Drawn on a compute thread: an uploaded mesh can hold a million triangles.
-      const references = await taskReferences(membership.workspaceId, v.document);
+      const references = await meshReferences(membership.workspaceId, v.document);
       const drawing = await ctx.compute.run<PartDrawing>({ kind: 'part-drawing', document: v.document, references });
       const pdf = await spinReportPdf({
         partName: part.name, projectName: project?.name ?? '', workspaceName: membership.workspace.name, number: v.number, label: v.label,
