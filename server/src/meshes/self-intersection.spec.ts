@@ -34,6 +34,21 @@ describe('a surface that crosses itself', () => {
     expect(selfIntersectionProblem(pair!)).toMatchObject({ code: 'self_intersecting', firstTriangle: i, message: expect.stringContaining(`facets ${i + 1} and ${j + 1}`) });
   });
 
+  it('names the crossing facets by their place in the file, whatever order the tree keeps them in', async () => {
+    // A small tetrahedron poking out through the +x face of a unit box: boxMesh lists its faces
+    // −x, +x, −y, +y, −z, +z, two triangles each, so the +x face is triangles 2 and 3; the
+    // tetrahedron's four follow the box's twelve.
+    const tetra: Indexed = {
+      vertices: Float64Array.from([0.4, 0.1, 0.1, 0.4, 0.25, 0.1, 0.4, 0.1, 0.25, 0.6, 0.15, 0.15]),
+      triangles: Uint32Array.from([0, 2, 1, 0, 1, 3, 1, 2, 3, 2, 0, 3]),
+    };
+    const mesh = together(boxMesh(1, 1, 1), tetra);
+    const [i, j] = (await firstSelfIntersection(mesh.vertices, mesh.triangles))!;
+    expect([2, 3]).toContain(i);
+    expect(j).toBeGreaterThanOrEqual(12);
+    expect(j).toBeLessThan(16);
+  });
+
   it('is found where a sphere sits half inside a box', async () => {
     const mesh = together(boxMesh(0.1, 0.1, 0.1), sphereMesh(0.03, 24, 24));
     for (let k = 0; k < mesh.vertices.length; k += 3) if (k >= 8 * 3) mesh.vertices[k] += 0.05; // the sphere's centre onto the box's +x face
