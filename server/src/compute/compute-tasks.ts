@@ -1,6 +1,6 @@
 import type { MessagePort } from 'node:worker_threads';
 import {
-  analyzePart, analyzeValidatedPart, EngineInputError, meshMassProperties, parseStl, runScatterStudy, simulate, validatePartDocument, weldVertices,
+  analyzePart, analyzeValidatedPart, EngineInputError, meshMassProperties, parseStl, runScatterStudy, simulate, validatePartDocument,
   type InputIssue, type MeshProblem, type PartResolvers, type ResolvedMaterial, type ResolvedMesh,
 } from '@tumblewise/engine/worker';
 import { partDrawing } from '../exports/part-outline';
@@ -76,9 +76,8 @@ async function checkMesh(bytes: Uint8Array, maxTriangles: number): Promise<MeshC
   const analysis = meshMassProperties(parsed.mesh);
   const problems = [...parsed.problems, ...analysis.problems];
   let ok = analysis.ok;
-  if (ok) {
-    const { vertices, triangles } = weldVertices(parsed.mesh.corners, parsed.mesh.triangleCount);
-    const crossing = await firstSelfIntersection(vertices, triangles);
+  if (analysis.ok) {
+    const crossing = await firstSelfIntersection(analysis.welded.vertices, analysis.welded.triangles);
     if (crossing) {
       problems.push(selfIntersectionProblem(crossing));
       ok = false;

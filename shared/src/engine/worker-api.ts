@@ -11,7 +11,6 @@ export type { PartResolvers, ResolvedMaterial, ResolvedMesh } from './part/part-
 export { simulate } from './motion/simulate';
 export type { MeshProblem } from './mesh/mesh-problem';
 export { parseStl } from './mesh/parse-stl';
-export { weldVertices } from './mesh/weld-vertices';
 export { meshMassProperties } from './mesh/mesh-mass-properties';
 export { runScatterStudy } from './scatter/scatter-study';
 export { rotationFromDegrees } from './linear/rotation-from-degrees';

@@ -7,7 +7,11 @@ import { weldVertices } from './weld-vertices';
 
 /** Outcome of checking and integrating a parsed mesh. */
 export type MeshAnalysis =
-  | { ok: true; solid: Solid; problems: MeshProblem[]; vertexCount: number; triangleCount: number; bounds: { min: [number, number, number]; max: [number, number, number] } }
+  | {
+    ok: true; solid: Solid; problems: MeshProblem[]; vertexCount: number; triangleCount: number; bounds: { min: [number, number, number]; max: [number, number, number] };
+    /** The welded mesh that was checked (file units), for further checks. */
+    welded: { vertices: Float64Array; triangles: Uint32Array };
+  }
   | { ok: false; problems: MeshProblem[] };
 
 /**
@@ -28,5 +32,5 @@ export function meshMassProperties(mesh: ParsedMesh, scale = 1): MeshAnalysis {
       if (v > max[k]) max[k] = v;
     }
   }
-  return { ok: true, solid, problems: check.problems, vertexCount: vertices.length / 3, triangleCount: mesh.triangleCount, bounds: { min, max } };
+  return { ok: true, solid, problems: check.problems, vertexCount: vertices.length / 3, triangleCount: mesh.triangleCount, bounds: { min, max }, welded: { vertices, triangles } };
 }
