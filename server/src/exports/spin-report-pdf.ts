@@ -65,12 +65,18 @@ export function spinReportPdf(v: PdfVariant): Promise<Buffer> {
 
   drawPart(doc, v.drawing, r);
 
+  const bottom = () => doc.page.height - doc.page.margins.bottom;
+  /** Rows of a figure and its value; a row never splits across pages, a heading keeps its first rows. */
   const table = (title: string, rows: [string, string][]) => {
-    doc.moveDown(0.5).fillColor(teal).fontSize(12).text(title).moveDown(0.2);
+    if (doc.fontSize(12).y + 60 > bottom()) doc.addPage();
+    doc.moveDown(0.5).fillColor(teal).text(title, 48).moveDown(0.2).fontSize(9.5);
     for (const [k, val] of rows) {
+      const height = Math.max(doc.heightOfString(k, { width: 230 }), doc.heightOfString(val, { width: 257 }));
+      if (doc.y + height > bottom()) doc.addPage();
       const y = doc.y;
-      doc.fillColor('#444').fontSize(9.5).text(k, 48, y, { width: 230 });
+      doc.fillColor('#444').text(k, 48, y, { width: 230 });
       doc.fillColor('#111').text(val, 290, y, { width: 257 });
+      doc.y = y + height;
       doc.moveDown(0.15);
     }
     doc.x = 48;
@@ -102,7 +108,8 @@ export function spinReportPdf(v: PdfVariant): Promise<Buffer> {
     table('Category checks (indicative)', r.checks.map((c) => [c.title, `${c.status.toUpperCase()} — ${c.rule}`] as [string, string]));
   }
   if (r.notes.length) {
-    doc.moveDown(0.5).fillColor(teal).fontSize(12).text('Notes').fillColor('#222').fontSize(9);
+    if (doc.fontSize(12).y + 60 > bottom()) doc.addPage();
+    doc.moveDown(0.5).fillColor(teal).text('Notes', 48).fillColor('#222').fontSize(9);
     for (const n of r.notes) doc.text(`• ${n}`, { width: 499 });
   }
   doc.end();
