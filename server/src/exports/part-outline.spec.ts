@@ -1,5 +1,6 @@
 import { cubeTriangles } from '../test-support/stl-fixtures';
-import { convexHull, MAX_OUTLINE_CORNERS, partDrawing, partOutlines } from './part-outline';
+import { polygonArea, polygonContains } from 'd3-polygon';
+import { convexHull, MAX_OUTLINE_CORNERS, MAX_PIECEWISE_TRIANGLES, partDrawing, partOutlines } from './part-outline';
 
 describe('part outlines for the PDF drawing', () => {
   it('the hull of a square and its inner points is the square', () => {
@@ -44,6 +45,8 @@ describe('part outlines for the PDF drawing', () => {
     const drawing = partDrawing(doc, () => undefined);
     expect(drawing.outlines.map((o) => o.id)).toEqual(['b']);
     expect(drawing.meshesLeftOut).toBe(1);
+    const twice = partDrawing({ primitives: [{ id: 'a', shape: 'mesh', meshId: 'gone' }, { id: 'b', shape: 'mesh', meshId: 'gone' }] }, () => undefined);
+    expect(twice.meshesLeftOut).toBe(1); // one mesh, however many primitives use it
     expect(partDrawing(doc, () => boxCorners).meshesLeftOut).toBe(0);
   });
 
@@ -59,6 +62,32 @@ describe('part outlines for the PDF drawing', () => {
     expect(outline.points.length).toBeLessThanOrEqual(MAX_OUTLINE_CORNERS);
     const xs = outline.points.map((p) => p[0]);
     expect(Math.max(...xs) - Math.min(...xs)).toBeCloseTo(0.2, 6);
+    expect(n).toBeGreaterThan(MAX_PIECEWISE_TRIANGLES);
+    expect(outline.pieces).toBeUndefined(); // too many triangles to draw one by one: its hull
+  });
+
+  // Containment by d3-polygon's polygonContains (ray casting), independent of how pieces are made.
+  const inside = (pieces: [number, number][][], point: [number, number]) => pieces.some((p) => polygonContains(p, point));
+
+  it('draws a torus seen along its axis as a ring: the centre is not filled, the tube is', () => {
+    // Torus of centre-circle radius R = 0.1 and tube radius a = 0.01 about local z: seen along z it
+    // covers the annulus R − a ≤ r ≤ R + a (geometry).
+    const [ring] = partOutlines({ primitives: [{ id: 'hoop', shape: 'torus', majorRadius: 0.1, minorRadius: 0.01 }] }, [1, 0, 0], [0, 1, 0]);
+    expect(ring.pieces!.length).toBe(36);
+    expect(inside(ring.pieces!, [0, 0])).toBe(false);
+    expect(inside(ring.pieces!, [0.05, 0])).toBe(false);
+    expect(inside(ring.pieces!, [0.1, 0])).toBe(true);
+    expect(inside(ring.pieces!, [0, -0.105])).toBe(true);
+    expect(inside(ring.pieces!, [0.115, 0])).toBe(false);
+  });
+
+  it('draws a small uploaded mesh triangle by triangle, every piece counter-clockwise', () => {
+    const [box] = partOutlines({ primitives: [{ id: 'm', shape: 'mesh', meshId: 'a' }] }, [1, 0, 0], [0, 1, 0], () => boxCorners);
+    expect(box.pieces).toHaveLength(12);
+    // d3's polygonArea is positive for counter-clockwise polygons in its y-down convention, so
+    // counter-clockwise in our y-up drawing plane is negative there; edge-on triangles have zero area.
+    for (const piece of box.pieces!) expect(polygonArea(piece)).toBeLessThanOrEqual(1e-15);
+    expect(inside(box.pieces!, [0.5, 1])).toBe(true);
   });
 
   it('looks along the grip face normal with the grip axis up, or along part x with z up', () => {

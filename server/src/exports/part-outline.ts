@@ -6,6 +6,12 @@ export interface Outline {
   id: string;
   mode: 'add' | 'remove';
   points: [number, number][];
+  /**
+   * A shape that is not convex seen from some side (a torus, a mesh of up to
+   * MAX_PIECEWISE_TRIANGLES triangles): convex pieces, each counter-clockwise, whose union is the
+   * silhouette (a ring seen along its axis keeps its hole). `points` is then their hull.
+   */
+  pieces?: [number, number][][];
 }
 
 type Vec = [number, number, number];
@@ -60,6 +66,46 @@ function localSamples(p: Prim, meshCorners: MeshCorners): Vec[] {
   }
 }
 
+/** Meshes of at most this many triangles are drawn triangle by triangle (holes kept); larger ones as their hull. */
+export const MAX_PIECEWISE_TRIANGLES = 20_000;
+
+/**
+ * Groups of local points whose hulls together make the primitive's silhouette, for shapes that are
+ * not convex: a torus as 36 segments of its tube, a mesh as its triangles. Null for the others.
+ */
+function localPieces(p: Prim, meshCorners: MeshCorners): Vec[][] | null {
+  if (p.shape === 'torus') {
+    const R = num(p.majorRadius), a = num(p.minorRadius);
+    const tube = (u: number) => Array.from({ length: 12 }, (_, j) => {
+      const v = (2 * Math.PI * j) / 12;
+      return [(R + a * Math.cos(v)) * Math.cos(u), (R + a * Math.cos(v)) * Math.sin(u), a * Math.sin(v)] as Vec;
+    });
+    return Array.from({ length: 36 }, (_, i) => [...tube((2 * Math.PI * i) / 36), ...tube((2 * Math.PI * (i + 1)) / 36)]);
+  }
+  if (p.shape !== 'mesh') return null;
+  const scale = num(p.scale, 1);
+  if (typeof p.meshId === 'string') {
+    const corners = meshCorners(p.meshId);
+    if (!corners || corners.length / 9 > MAX_PIECEWISE_TRIANGLES) return null;
+    const at = (k: number): Vec => [corners[k] * scale, corners[k + 1] * scale, corners[k + 2] * scale];
+    return Array.from({ length: Math.floor(corners.length / 9) }, (_, t) => [at(9 * t), at(9 * t + 3), at(9 * t + 6)]);
+  }
+  const vertices = Array.isArray(p.vertices) ? p.vertices : [], triangles = Array.isArray(p.triangles) ? p.triangles : [];
+  if (triangles.length === 0 || triangles.length > MAX_PIECEWISE_TRIANGLES) return null;
+  const at = (i: unknown): Vec => { const [x, y, z] = vec(vertices[num(i, -1)]); return [x * scale, y * scale, z * scale]; };
+  return triangles.map((t) => (Array.isArray(t) && t.length === 3 ? [at(t[0]), at(t[1]), at(t[2])] : []));
+}
+
+/** A polygon counter-clockwise (positive shoelace area), so pieces filled together make their union. */
+function counterClockwise(polygon: [number, number][]): [number, number][] {
+  let twiceArea = 0;
+  for (let i = 0; i < polygon.length; i++) {
+    const [x, y] = polygon[i], [u, v] = polygon[(i + 1) % polygon.length];
+    twiceArea += x * v - u * y;
+  }
+  return twiceArea < 0 ? [...polygon].reverse() : polygon;
+}
+
 /** The convex hull of points in the plane (d3-polygon: Andrew's monotone chain); fewer than three are kept as they are. */
 export function convexHull(points: [number, number][]): [number, number][] {
   return points.length < 3 ? points : polygonHull(points) ?? points;
@@ -91,12 +137,16 @@ export function partOutlines(doc: unknown, right: Vec, up: Vec, meshCorners: Mes
     const [rx, ry, rz] = vec(p.rotationDeg);
     rotationFromDegrees(m, rx, ry, rz);
     const [px, py, pz] = vec(p.position);
-    const projected = localSamples(p, meshCorners).map(([x, y, z]) => {
+    const project = ([x, y, z]: Vec): [number, number] => {
       const wx = m[0] * x + m[1] * y + m[2] * z + px, wy = m[3] * x + m[4] * y + m[5] * z + py, wz = m[6] * x + m[7] * y + m[8] * z + pz;
-      return [wx * right[0] + wy * right[1] + wz * right[2], wx * up[0] + wy * up[1] + wz * up[2]] as [number, number];
-    });
+      return [wx * right[0] + wy * right[1] + wz * right[2], wx * up[0] + wy * up[1] + wz * up[2]];
+    };
+    const id = typeof p.id === 'string' ? p.id : `#${i}`, mode = p.mode === 'remove' ? 'remove' : 'add';
+    const pieces = localPieces(p, meshCorners)?.filter((g) => g.length >= 3).map((g) => counterClockwise(convexHull(g.map(project))));
+    if (pieces && pieces.length > 0) return [{ id, mode, points: convexHull(pieces.flat()), pieces } as Outline];
+    const projected = localSamples(p, meshCorners).map(project);
     if (projected.length === 0) return [];
-    return [{ id: typeof p.id === 'string' ? p.id : `#${i}`, mode: p.mode === 'remove' ? 'remove' : 'add', points: p.shape === 'point' ? projected : convexHull(projected) } as Outline];
+    return [{ id, mode, points: p.shape === 'point' ? projected : convexHull(projected) } as Outline];
   });
 }
 
@@ -105,7 +155,7 @@ export interface PartDrawing {
   right: Vec;
   up: Vec;
   outlines: Outline[];
-  /** Uploaded meshes the document names whose corners were not at hand (left out of the drawing). */
+  /** Uploaded meshes (distinct ids) the document names whose corners were not at hand (left out of the drawing). */
   meshesLeftOut: number;
 }
 
@@ -118,11 +168,11 @@ export function partDrawing(doc: unknown, meshCorners: MeshCorners = () => undef
   const up: Vec = Array.isArray(grip?.axis) && grip.axis.length === 3 ? vec(grip.axis) : [0, 0, 1];
   const face: Vec = Array.isArray(grip?.faceNormal) && grip.faceNormal.length === 3 ? vec(grip.faceNormal) : Math.abs(up[0]) < 0.9 ? [1, 0, 0] : [0, 1, 0];
   const right: Vec = [up[1] * face[2] - up[2] * face[1], up[2] * face[0] - up[0] * face[2], up[0] * face[1] - up[1] * face[0]];
-  let meshesLeftOut = 0;
+  const missing = new Set<string>();
   const counted: MeshCorners = (id) => {
     const corners = meshCorners(id);
-    if (!corners) meshesLeftOut++;
+    if (!corners) missing.add(id);
     return corners;
   };
-  return { right, up, outlines: partOutlines(doc, right, up, counted), meshesLeftOut };
+  return { right, up, outlines: partOutlines(doc, right, up, counted), meshesLeftOut: missing.size };
 }

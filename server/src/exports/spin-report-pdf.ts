@@ -132,6 +132,13 @@ function drawPart(doc: PDFKit.PDFDocument, { right, up, outlines, meshesLeftOut 
   doc.save().rect(box.x, box.y, box.w, box.h).stroke('#cccccc');
   for (const o of outlines) {
     if (o.points.length === 1) { doc.circle(tx(o.points[0][0]), ty(o.points[0][1]), 2.5).fill('#b3261e'); continue; }
+    if (o.pieces) {
+      // One path of counter-clockwise pieces filled by the non-zero rule: their union, holes kept, in one even tint.
+      for (const piece of o.pieces) doc.polygon(...piece.map(([x, y]) => [tx(x), ty(y)] as [number, number]));
+      if (o.mode === 'remove') doc.fill('#ffffff', 'non-zero');
+      else doc.fillOpacity(0.55).fill('#7fb7bb', 'non-zero').fillOpacity(1);
+      continue;
+    }
     doc.polygon(...o.points.map(([x, y]) => [tx(x), ty(y)] as [number, number]));
     if (o.mode === 'remove') doc.dash(3, { space: 2 }).fillAndStroke('#ffffff', '#888888').undash();
     else doc.fillOpacity(0.55).fillAndStroke('#7fb7bb', teal()).fillOpacity(1);
