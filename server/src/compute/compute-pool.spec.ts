@@ -68,6 +68,23 @@ describe('the compute pool', () => {
   });
 });
 
+describe('a pool of one thread', () => {
+  const pool = new ComputePool(1);
+  afterAll(() => pool.close());
+
+  it('still runs a short simulation while a long one holds a thread (MIN_INTERRUPTIBLE_THREADS)', async () => {
+    const controller = new AbortController();
+    const long = pool.run({ kind: 'simulate', input: { moments: [6.5, 5, 2.5], axis: 'intermediate', rate: 1500, misalignmentDeg: 1, seconds: 600, sampleRate: 1 } }, controller.signal);
+    let longSettled = false;
+    long.then(() => (longSettled = true), () => (longSettled = true));
+    const short = await pool.run<object>({ kind: 'simulate', input: { moments: [6.5, 5, 2.5], axis: 'major', rate: 10, misalignmentDeg: 1, seconds: 1, sampleRate: 50 } });
+    expect(short).toBeTruthy();
+    expect(longSettled).toBe(false); // answered while the long one was still running
+    controller.abort();
+    await expect(long).rejects.toMatchObject({ status: 499 });
+  });
+});
+
 describe('the compute threads’ code', () => {
   it('loads no mathjs (a small heap keeps the schema checks fast)', () => {
     const script = "require('tsx/cjs/api').register(); require('./server/src/compute/compute-tasks.ts');"

@@ -29,6 +29,13 @@ export function isSmallAnalysis(task: ComputeTask): boolean {
  */
 export const ANALYSES_PER_WORKER = 8;
 
+/**
+ * Threads for simulations, scatter studies and mesh checks, at least: a check of a large upload
+ * (seconds for a million triangles) or a long study then shares the processor with a tumble
+ * preview's simulation instead of making it wait, even where there is one core to spare.
+ */
+export const MIN_INTERRUPTIBLE_THREADS = 2;
+
 /** Whether a task ends with its thread when cancelled (see ComputePool.run). */
 const interruptible = (task: ComputeTask) => task.kind !== 'analyze' && task.kind !== 'analyze-json';
 
@@ -39,7 +46,8 @@ const interruptible = (task: ComputeTask) => task.kind !== 'analyze' && task.kin
  *
  * Two pools: analyses, which are never interrupted, queue several to a thread
  * (ANALYSES_PER_WORKER); simulations, scatter studies and mesh checks take a thread each, since
- * cancelling one ends its thread and must not take other tasks with it.
+ * cancelling one ends its thread and must not take other tasks with it, and have at least
+ * MIN_INTERRUPTIBLE_THREADS.
  */
 export class ComputePool {
   private readonly analyses: Piscina;
@@ -54,7 +62,7 @@ export class ComputePool {
       maxQueue: 200,
     };
     this.analyses = new Piscina({ ...options, concurrentTasksPerWorker: ANALYSES_PER_WORKER });
-    this.interruptibles = new Piscina(options);
+    this.interruptibles = new Piscina({ ...options, maxThreads: Math.max(MIN_INTERRUPTIBLE_THREADS, threads) });
   }
 
   /**
