@@ -1,4 +1,4 @@
-import { polygonHull } from 'd3-polygon';
+import { polygonArea, polygonHull } from 'd3-polygon';
 import { rotationFromDegrees } from '@tumblewise/engine/worker';
 
 /** A primitive's silhouette projected on a drawing plane (convex hull of surface samples), in m. */
@@ -96,14 +96,12 @@ function localPieces(p: Prim, meshCorners: MeshCorners): Vec[][] | null {
   return triangles.map((t) => (Array.isArray(t) && t.length === 3 ? [at(t[0]), at(t[1]), at(t[2])] : []));
 }
 
-/** A polygon counter-clockwise (positive shoelace area), so pieces filled together make their union. */
+/**
+ * A polygon counter-clockwise in the drawing plane (y up), so pieces filled together make their
+ * union. d3-polygon's polygonArea is positive for counter-clockwise with y down, so negative here.
+ */
 function counterClockwise(polygon: [number, number][]): [number, number][] {
-  let twiceArea = 0;
-  for (let i = 0; i < polygon.length; i++) {
-    const [x, y] = polygon[i], [u, v] = polygon[(i + 1) % polygon.length];
-    twiceArea += x * v - u * y;
-  }
-  return twiceArea < 0 ? [...polygon].reverse() : polygon;
+  return polygonArea(polygon) > 0 ? [...polygon].reverse() : polygon;
 }
 
 /** The convex hull of points in the plane (d3-polygon: Andrew's monotone chain); fewer than three are kept as they are. */
