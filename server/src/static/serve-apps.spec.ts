@@ -32,7 +32,8 @@ describe('serveApps: the built apps, compressed', () => {
     dist = mkdtempSync(path.join(os.tmpdir(), 'tw-serve-apps-'));
     for (const folder of ['designer', 'admin']) mkdirSync(path.join(dist, folder, 'browser'), { recursive: true });
     writeFileSync(chunkFile(), chunk);
-    writeFileSync(path.join(dist, 'designer', 'browser', 'index.html'), '<!doctype html><title>t</title>');
+    writeFileSync(path.join(dist, 'designer', 'browser', 'index.html'), '<!doctype html><title>designer</title>');
+    writeFileSync(path.join(dist, 'admin', 'browser', 'index.html'), '<!doctype html><title>admin</title>');
     writeFileSync(path.join(dist, 'designer', 'browser', 'tiny-ABCD1234.js'), 'export {};\n');
     writeFileSync(path.join(dist, 'designer', 'browser', '.hidden.json'), JSON.stringify({ secret: 'x'.repeat(2000) }));
     writeFileSync(path.join(dist, 'secret.txt'), 's'.repeat(4000));
@@ -92,5 +93,29 @@ describe('serveApps: the built apps, compressed', () => {
     expect(hidden.text).not.toContain('secret');
     const escape = await request(app).get('/..%2fsecret.txt').set('Accept-Encoding', 'gzip');
     expect(escape.text).not.toContain('ssss');
+  });
+
+  it('answers the home address and every deep link with its app, and leaves the API alone', async () => {
+    // The first address `npm start` prints is `/`; Express 5's `/*splat` alone needs a segment, so it answered 404.
+    for (const url of ['/', '/projects', '/projects/p1/parts/x2/compare', '/signin?next=%2F', '/no-such-page']) {
+      const res = await request(app).get(url).expect(200);
+      expect({ url, text: res.text }).toEqual({ url, text: '<!doctype html><title>designer</title>' });
+    }
+    // `/admin` moves to `/admin/`, where the admin app's relative base resolves.
+    expect((await request(app).get('/admin').expect(301)).headers['location']).toBe('/admin/');
+    for (const url of ['/admin/', '/admin/members', '/admin/operator/workspaces']) {
+      const res = await request(app).get(url).expect(200);
+      expect({ url, text: res.text }).toEqual({ url, text: '<!doctype html><title>admin</title>' });
+    }
+    // Paths under /api are never answered with a page; a neighbour that only starts with the letters is.
+    await request(app).get('/api/v1/nothing').expect(404);
+    await request(app).get('/api').expect(404);
+    expect((await request(app).get('/apiary').expect(200)).text).toContain('designer');
+  });
+
+  it('says how to build an app that has not been built', async () => {
+    rmSync(path.join(dist, 'designer', 'browser', 'index.html'));
+    const res = await request(app).get('/').expect(503);
+    expect(res.text).toMatch(/has not been built yet/);
   });
 });

@@ -7,6 +7,9 @@ import zlib from 'node:zlib';
 /** Hashed assets (the builder names them `chunk-7BDNFNOT.js`) never change under their name; everything else is revalidated. */
 const cacheControl = (file: string) => (/-[0-9A-Z]{8}\.(js|css|woff2?)$/.test(file) ? 'public, max-age=31536000, immutable' : 'no-cache');
 
+/** `/api`, `/api/…` belong to `/api`; `/apiary` does not. */
+const belongsTo = (requestPath: string, prefix: string) => requestPath === prefix || requestPath.startsWith(`${prefix}/`);
+
 /**
  * The built apps: admin at /admin/, designer at /. Unknown paths inside an app answer its
  * index.html so client-side routes survive a reload. Hashed assets are cached for a year. Text
@@ -23,8 +26,9 @@ export function serveApps(distDir: string): Router {
       index: false,
       setHeaders: (res, file) => { res.setHeader('Cache-Control', cacheControl(file)); },
     }));
-    router.get(prefix === '/' ? '/*splat' : `${prefix}{/*splat}`, (req, res, next) => {
-      if (prefix === '/' && (req.path.startsWith('/api/') || req.path.startsWith('/admin'))) return next();
+    // `{/*splat}` also matches the bare prefix: Express 5's `/*splat` needs one segment, so `/` answered 404.
+    router.get(prefix === '/' ? '{/*splat}' : `${prefix}{/*splat}`, (req, res, next) => {
+      if (prefix === '/' && (belongsTo(req.path, '/api') || belongsTo(req.path, '/admin'))) return next();
       if (!existsSync(index)) {
         res.status(503).type('text/plain').send(`The ${name} app has not been built yet. Run "npm start" (it builds the apps) or "npm run build".`);
         return;

@@ -6,6 +6,8 @@ import { requireSession } from './core/require-session';
 /** Routes of the designer app; the account screens are public, everything else needs a session. */
 export const routes: Routes = [
   { path: '', pathMatch: 'full', title: 'Projects · Tumblewise', canActivate: [requireSession], loadComponent: () => import('./features/projects/projects').then((m) => m.Projects) },
+  // The project list lives at the home address; `/projects` is where people type it.
+  { path: 'projects', pathMatch: 'full', redirectTo: '' },
   { path: 'projects/:projectId', title: 'Project · Tumblewise', canActivate: [requireSession], loadComponent: () => import('./features/project/project-parts').then((m) => m.ProjectParts) },
   { path: 'projects/:projectId/parts/:partId', title: 'Part editor · Tumblewise', canActivate: [requireSession], loadComponent: () => import('./features/part-editor/part-editor').then((m) => m.PartEditor) },
   // Compare, scatter study and the review e-mail's link.

@@ -8,7 +8,7 @@ import { EmptyState } from '../empty-state/empty-state';
   changeDetection: ChangeDetectionStrategy.OnPush,
   imports: [EmptyState, RouterLink],
   template: `
-    <div class="tw-page">
+    <div class="tw-page" data-testid="not-found">
       <h1 class="tw-visually-hidden">Page not found</h1>
       <tw-empty-state icon="explore_off" heading="There is nothing at this address" message="The link may be old or mistyped.">
         <a routerLink="/">Go to the start page</a>
