@@ -31,7 +31,11 @@ module.exports = {
       testMatch: ['<rootDir>/server/**/*.spec.ts'],
       transform: { '^.+\\.ts$': swc, [`/node_modules/(${esmPackages})/.+\\.js$`]: swcJs },
       transformIgnorePatterns: [`/node_modules/(?!(${esmPackages})/)`],
-      moduleNameMapper: { ...aliases, '^three$': '<rootDir>/node_modules/three/build/three.module.js', '^three-mesh-bvh$': '<rootDir>/node_modules/three-mesh-bvh/src/index.js' },
+      moduleNameMapper: {
+        ...aliases,
+        '^three$': '<rootDir>/node_modules/three/build/three.module.js',
+        '^three-mesh-bvh$': '<rootDir>/node_modules/three-mesh-bvh/src/index.js',
+      },
       globalSetup: '<rootDir>/server/src/test-support/global-setup.ts',
       globalTeardown: '<rootDir>/server/src/test-support/global-teardown.ts',
       setupFiles: ['<rootDir>/server/src/test-support/env.ts'],

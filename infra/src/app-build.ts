@@ -22,17 +22,28 @@ function newestMtime(dirs: string[]): number {
 /** Builds an app with the Angular CLI when its output is missing or older than its sources. */
 export function buildAppIfStale(app: 'designer' | 'admin', force = false): 'built' | 'up to date' {
   const index = path.join(projectRoot, 'dist', app, 'browser', 'index.html');
-  const sources = ['apps/' + app, 'libs', 'shared/src', 'angular.json', 'tsconfig.base.json', 'package-lock.json'].map((p) => path.join(projectRoot, p));
-  const srcTime = Math.max(newestMtime(sources.filter((s) => statSafe(s)?.isDirectory())), ...sources.map((s) => statSafe(s)?.isFile() ? statSafe(s)!.mtimeMs : 0));
+  const sources = ['apps/' + app, 'libs', 'shared/src', 'angular.json', 'tsconfig.base.json', 'package-lock.json'].map((p) =>
+    path.join(projectRoot, p),
+  );
+  const srcTime = Math.max(
+    newestMtime(sources.filter((s) => statSafe(s)?.isDirectory())),
+    ...sources.map((s) => (statSafe(s)?.isFile() ? statSafe(s)!.mtimeMs : 0)),
+  );
   if (!force && existsSync(index) && statSync(index).mtimeMs >= srcTime) return 'up to date';
   console.log(`[build] building the ${app} app …`);
   const result = spawnSync(process.execPath, [path.join(projectRoot, 'node_modules/@angular/cli/bin/ng.js'), 'build', app], {
-    cwd: projectRoot, stdio: 'inherit', env: { ...process.env, NG_CLI_ANALYTICS: 'false' },
+    cwd: projectRoot,
+    stdio: 'inherit',
+    env: { ...process.env, NG_CLI_ANALYTICS: 'false' },
   });
   if (result.status !== 0) throw new Error(`Building the ${app} app failed (see above).`);
   return 'built';
 }
 
 function statSafe(p: string) {
-  try { return statSync(p); } catch { return null; }
+  try {
+    return statSync(p);
+  } catch {
+    return null;
+  }
 }

@@ -44,7 +44,10 @@ export async function startLocalServices(options: {
   const webhookSecret = storedSecret(data, 'paymentWebhookSecret', () => `whsec_${randomBytes(24).toString('base64url')}`);
   const cluster = new PostgresCluster({
     dataDir: options.clusterDir ?? path.join(clusterParentDir(), 'postgres'),
-    port: ports.postgres, user: 'tumblewise', password, throwaway: options.throwaway,
+    port: ports.postgres,
+    user: 'tumblewise',
+    password,
+    throwaway: options.throwaway,
   });
   const clusterState = cluster.ensureInitialised();
   if (!cluster.isRunning()) await assertPortFree(ports.postgres, 'PostgreSQL', 'TUMBLEWISE_PG_PORT');
@@ -62,13 +65,20 @@ export async function startLocalServices(options: {
   } catch (err) {
     // Leave nothing running behind a failed start.
     await mail.stop().catch(() => undefined);
-    try { cluster.stop(); } catch { /* already down */ }
+    try {
+      cluster.stop();
+    } catch {
+      /* already down */
+    }
     throw err;
   }
   const started = payment;
 
   return {
-    cluster, mail, paymentUrl: started.url, clusterState,
+    cluster,
+    mail,
+    paymentUrl: started.url,
+    clusterState,
     env: {
       DATABASE_URL: cluster.url(options.database),
       SMTP_HOST: '127.0.0.1',

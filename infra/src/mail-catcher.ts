@@ -28,12 +28,35 @@ export class MailCatcher {
     const { smtpPort, webPort, mailDir } = this.options;
     mkdirSync(mailDir, { recursive: true });
     const bin = path.join(projectRoot, 'node_modules/maildev/dist/bin/maildev.js');
-    const child = spawn(process.execPath, [bin, '--ip', '127.0.0.1', '--web-ip', '127.0.0.1', '-s', String(smtpPort), '-w', String(webPort), '--mail-directory', mailDir, '--silent'], { stdio: ['ignore', 'pipe', 'pipe'] });
+    const child = spawn(
+      process.execPath,
+      [
+        bin,
+        '--ip',
+        '127.0.0.1',
+        '--web-ip',
+        '127.0.0.1',
+        '-s',
+        String(smtpPort),
+        '-w',
+        String(webPort),
+        '--mail-directory',
+        mailDir,
+        '--silent',
+      ],
+      { stdio: ['ignore', 'pipe', 'pipe'] },
+    );
     this.child = child;
     let output = '';
-    child.stdout?.on('data', (d) => { output += d; });
-    child.stderr?.on('data', (d) => { output += d; });
-    const exited = new Promise<never>((_, reject) => child.once('exit', (code) => reject(new Error(`maildev exited (${code}): ${output.trim()}`))));
+    child.stdout?.on('data', (d) => {
+      output += d;
+    });
+    child.stderr?.on('data', (d) => {
+      output += d;
+    });
+    const exited = new Promise<never>((_, reject) =>
+      child.once('exit', (code) => reject(new Error(`maildev exited (${code}): ${output.trim()}`))),
+    );
     await Promise.race([this.waitUntilHealthy(15000), exited]);
   }
 
@@ -44,7 +67,10 @@ export class MailCatcher {
     await new Promise<void>((resolve) => {
       // maildev waits for open SMTP connections on SIGTERM; do not wait for them for long.
       const force = setTimeout(() => child.kill('SIGKILL'), 2000);
-      child.once('exit', () => { clearTimeout(force); resolve(); });
+      child.once('exit', () => {
+        clearTimeout(force);
+        resolve();
+      });
       child.kill('SIGTERM');
     });
   }
@@ -55,7 +81,9 @@ export class MailCatcher {
       try {
         const res = await fetch(`${this.inboxUrl}/api/healthz`);
         if (res.ok) return;
-      } catch { /* not up yet */ }
+      } catch {
+        /* not up yet */
+      }
       if (Date.now() > deadline) throw new Error(`maildev did not answer on ${this.inboxUrl} within ${timeoutMs} ms`);
       await new Promise((r) => setTimeout(r, 100));
     }

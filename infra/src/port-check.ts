@@ -30,7 +30,10 @@ export async function waitForPort(port: number, timeoutMs: number): Promise<void
   for (;;) {
     const open = await new Promise<boolean>((resolve) => {
       const socket = net.connect(port, '127.0.0.1');
-      socket.once('connect', () => { socket.destroy(); resolve(true); });
+      socket.once('connect', () => {
+        socket.destroy();
+        resolve(true);
+      });
       socket.once('error', () => resolve(false));
     });
     if (open) return;

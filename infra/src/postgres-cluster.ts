@@ -56,7 +56,18 @@ export class PostgresCluster {
     try {
       this.chownToPostgres(dataDir);
       this.chownToPostgres(pwFile);
-      this.run('initdb', ['-D', dataDir, '-U', user, `--pwfile=${pwFile}`, '--auth-host=scram-sha-256', '--auth-local=peer', '-E', 'UTF8', '--locale=C.UTF-8']);
+      this.run('initdb', [
+        '-D',
+        dataDir,
+        '-U',
+        user,
+        `--pwfile=${pwFile}`,
+        '--auth-host=scram-sha-256',
+        '--auth-local=peer',
+        '-E',
+        'UTF8',
+        '--locale=C.UTF-8',
+      ]);
     } finally {
       rmSync(pwFile, { force: true });
     }
@@ -95,7 +106,11 @@ export class PostgresCluster {
 
   /** Stops the server and deletes the cluster's files. */
   destroy(): void {
-    try { this.stop(); } finally { rmSync(this.options.dataDir, { recursive: true, force: true }); }
+    try {
+      this.stop();
+    } finally {
+      rmSync(this.options.dataDir, { recursive: true, force: true });
+    }
   }
 
   private spawnOptions(): ExecFileSyncOptions {

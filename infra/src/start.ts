@@ -11,16 +11,28 @@ async function main(): Promise<void> {
   const port = num('PORT', 4300);
   await assertPortFree(port, 'the Tumblewise server', 'PORT');
   const services = await startLocalServices({
-    ports: { postgres: num('TUMBLEWISE_PG_PORT', 54329), smtp: num('SMTP_PORT', 4325), mailWeb: num('MAIL_WEB_PORT', 4380), payment: num('PAYMENT_PORT', 4390) },
+    ports: {
+      postgres: num('TUMBLEWISE_PG_PORT', 54329),
+      smtp: num('SMTP_PORT', 4325),
+      mailWeb: num('MAIL_WEB_PORT', 4380),
+      payment: num('PAYMENT_PORT', 4390),
+    },
     database: 'tumblewise',
     webhookUrl: `http://127.0.0.1:${port}/api/v1/billing/webhook`,
   });
   let stopping = false;
-  const stopServices = async () => { if (!stopping) { stopping = true; await services.stop(); } };
+  const stopServices = async () => {
+    if (!stopping) {
+      stopping = true;
+      await services.stop();
+    }
+  };
   try {
-    console.log(services.clusterState === 'reused'
-      ? '[postgres] reusing the existing database cluster and its data'
-      : '[postgres] created a new database cluster');
+    console.log(
+      services.clusterState === 'reused'
+        ? '[postgres] reusing the existing database cluster and its data'
+        : '[postgres] created a new database cluster',
+    );
     for (const app of ['designer', 'admin'] as const) buildAppIfStale(app);
     Object.assign(process.env, services.env, { PORT: String(port) });
     const { ctx, stop, applied, seeded } = await startServer({ seedDemo: true });

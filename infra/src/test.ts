@@ -10,7 +10,10 @@ import { projectRoot } from './paths';
  * browser flows (jest + playwright-core in Debian's Chromium) — and ends with a summary.
  * Every step runs even when an earlier one failed; the exit code is non-zero on any failure.
  */
-interface Step { name: string; run: () => boolean }
+interface Step {
+  name: string;
+  run: () => boolean;
+}
 
 const bin = (pkg: string, file: string) => path.join(projectRoot, 'node_modules', pkg, file);
 const node = (args: string[], env: Record<string, string> = {}) =>
@@ -19,13 +22,24 @@ const jest = (config: string, extra: string[] = []) => node([bin('jest', 'bin/je
 const extraArgs = process.argv.slice(2);
 
 const steps: Step[] = [
+  { name: 'lint (ESLint: typescript-eslint, angular-eslint)', run: () => node([bin('eslint', 'bin/eslint.js'), '.', '--quiet']) },
+  { name: 'format check (Prettier)', run: () => node([bin('prettier', 'bin/prettier.cjs'), '--check', '.', '--log-level', 'warn']) },
   { name: 'type-check (shared, server, infra)', run: () => node([bin('typescript', 'bin/tsc'), '-p', 'tsconfig.json', '--noEmit']) },
   { name: 'type-check (browser flows)', run: () => node([bin('typescript', 'bin/tsc'), '-p', 'test/tsconfig.json', '--noEmit']) },
-  { name: 'type-check (designer app, templates)', run: () => node([bin('@angular/compiler-cli', 'bundles/src/bin/ngc.js'), '-p', 'apps/designer/tsconfig.app.json', '--noEmit']) },
-  { name: 'type-check (admin app, templates)', run: () => node([bin('@angular/compiler-cli', 'bundles/src/bin/ngc.js'), '-p', 'apps/admin/tsconfig.app.json', '--noEmit']) },
+  {
+    name: 'type-check (designer app, templates)',
+    run: () => node([bin('@angular/compiler-cli', 'bundles/src/bin/ngc.js'), '-p', 'apps/designer/tsconfig.app.json', '--noEmit']),
+  },
+  {
+    name: 'type-check (admin app, templates)',
+    run: () => node([bin('@angular/compiler-cli', 'bundles/src/bin/ngc.js'), '-p', 'apps/admin/tsconfig.app.json', '--noEmit']),
+  },
   {
     name: 'type-check (Angular unit tests)',
-    run: () => ['apps/designer', 'apps/admin', 'libs/ui', 'libs/api-client', 'libs/viewer'].every((dir) => node([bin('typescript', 'bin/tsc'), '-p', `${dir}/tsconfig.spec.json`, '--noEmit'])),
+    run: () =>
+      ['apps/designer', 'apps/admin', 'libs/ui', 'libs/api-client', 'libs/viewer'].every((dir) =>
+        node([bin('typescript', 'bin/tsc'), '-p', `${dir}/tsconfig.spec.json`, '--noEmit']),
+      ),
   },
   { name: 'shared and server suites (jest)', run: () => jest('jest.config.js', extraArgs) },
   { name: 'Angular unit tests (jest, jsdom)', run: () => jest('jest.angular.config.js', extraArgs) },

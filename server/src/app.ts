@@ -33,19 +33,30 @@ export function createApp(ctx: AppContext): express.Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', ctx.config.trustProxy);
-  app.use(helmet({
-    contentSecurityPolicy: { directives: { 'font-src': ["'self'", 'data:'], 'img-src': ["'self'", 'data:', 'blob:'], 'connect-src': ["'self'"], 'upgrade-insecure-requests': null } },
-    strictTransportSecurity: ctx.config.env === 'production',
-  }));
-  app.use(pinoHttp({
-    logger: ctx.logger,
-    redact: { paths: ['req.headers.authorization', 'req.headers.cookie', 'res.headers["set-cookie"]'], censor: '[hidden]' },
-    serializers: {
-      req: (req) => ({ id: req.id, method: req.method, url: String(req.url).replace(/token=[^&]+/g, 'token=[hidden]') }),
-      res: (res) => ({ statusCode: res.statusCode }),
-    },
-    autoLogging: { ignore: (req) => !req.url?.startsWith('/api/') },
-  }));
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          'font-src': ["'self'", 'data:'],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'connect-src': ["'self'"],
+          'upgrade-insecure-requests': null,
+        },
+      },
+      strictTransportSecurity: ctx.config.env === 'production',
+    }),
+  );
+  app.use(
+    pinoHttp({
+      logger: ctx.logger,
+      redact: { paths: ['req.headers.authorization', 'req.headers.cookie', 'res.headers["set-cookie"]'], censor: '[hidden]' },
+      serializers: {
+        req: (req) => ({ id: req.id, method: req.method, url: String(req.url).replace(/token=[^&]+/g, 'token=[hidden]') }),
+        res: (res) => ({ statusCode: res.statusCode }),
+      },
+      autoLogging: { ignore: (req) => !req.url?.startsWith('/api/') },
+    }),
+  );
 
   const api = Router();
   // Before the JSON parser: the signature is checked on the raw body.

@@ -22,22 +22,32 @@ export async function startServer(options: { seedDemo?: boolean } = {}) {
   // The background-job worker starts after the port is open; studies queue meanwhile.
   ctx.scatter.start().catch((err) => ctx.logger.error({ err }, 'the background-job worker did not start'));
   return {
-    ctx, server, applied, seeded,
+    ctx,
+    server,
+    applied,
+    seeded,
     stop: async () => {
-      await new Promise<void>((resolve) => { server.closeAllConnections(); server.close(() => resolve()); });
+      await new Promise<void>((resolve) => {
+        server.closeAllConnections();
+        server.close(() => resolve());
+      });
       await closeContext(ctx);
     },
   };
 }
 
 if (require.main === module) {
-  startServer({ seedDemo: process.env.SEED_DEMO === 'true' }).then(({ ctx, stop }) => {
-    ctx.logger.info(`Tumblewise listening on ${ctx.config.publicUrl}`);
-    const shutdown = () => { void stop().then(() => process.exit(0)); };
-    process.once('SIGINT', shutdown);
-    process.once('SIGTERM', shutdown);
-  }).catch((err) => {
-    console.error(err instanceof Error ? err.message : err);
-    process.exit(1);
-  });
+  startServer({ seedDemo: process.env.SEED_DEMO === 'true' })
+    .then(({ ctx, stop }) => {
+      ctx.logger.info(`Tumblewise listening on ${ctx.config.publicUrl}`);
+      const shutdown = () => {
+        void stop().then(() => process.exit(0));
+      };
+      process.once('SIGINT', shutdown);
+      process.once('SIGTERM', shutdown);
+    })
+    .catch((err) => {
+      console.error(err instanceof Error ? err.message : err);
+      process.exit(1);
+    });
 }

@@ -6,12 +6,22 @@ export function partGenerator(seed = 20240601): (n: number) => Record<string, un
   const rnd = () => (seed = (Math.imul(seed, 1664525) + 1013904223) >>> 0) / 2 ** 32;
   return (n) => {
     const primitives = Array.from({ length: n }, (_, k) => {
-      const common = { id: `p${k}`, position: [rnd() - 0.5, rnd() - 0.5, 2 * rnd() - 1], rotationDeg: [360 * rnd() - 180, 180 * rnd() - 90, 360 * rnd() - 180], density: 300 + 3000 * rnd() };
+      const common = {
+        id: `p${k}`,
+        position: [rnd() - 0.5, rnd() - 0.5, 2 * rnd() - 1],
+        rotationDeg: [360 * rnd() - 180, 180 * rnd() - 90, 360 * rnd() - 180],
+        density: 300 + 3000 * rnd(),
+      };
       if (k % 3 === 0) return { ...common, shape: 'box', size: [0.01 + 0.1 * rnd(), 0.01 + 0.1 * rnd(), 0.01 + 0.1 * rnd()] };
       if (k % 3 === 1) return { ...common, shape: 'cylinder', radius: 0.005 + 0.05 * rnd(), length: 0.01 + 0.2 * rnd() };
       return { ...common, shape: 'sphere', radius: 0.005 + 0.05 * rnd() };
     });
-    return { name: `bench ${n}`, primitives, spin: { axis: [0, 0, 1], rate: 20 }, grip: { point: [0, 0, -1], axis: [0, 0, 1], faceNormal: [0, 1, 0] } };
+    return {
+      name: `bench ${n}`,
+      primitives,
+      spin: { axis: [0, 0, 1], rate: 20 },
+      grip: { point: [0, 0, -1], axis: [0, 0, 1], faceNormal: [0, 1, 0] },
+    };
   };
 }
 

@@ -46,8 +46,17 @@ function rapierMassProperties(world: RAPIER.World, doc: PartDocument): void {
     else if (p.shape === 'cylinder') d = RAPIER.ColliderDesc.cylinder(p.length / 2, p.radius);
     else if (p.shape === 'sphere') d = RAPIER.ColliderDesc.ball(p.radius);
     else continue;
-    const q = quatFromMat3(new Float64Array(4), rotationFromDegrees(new Float64Array(9), p.rotationDeg[0], p.rotationDeg[1], p.rotationDeg[2]));
-    world.createCollider(d.setDensity(p.density!).setTranslation(p.position[0], p.position[1], p.position[2]).setRotation({ x: q[0], y: q[1], z: q[2], w: q[3] }), rb);
+    const q = quatFromMat3(
+      new Float64Array(4),
+      rotationFromDegrees(new Float64Array(9), p.rotationDeg[0], p.rotationDeg[1], p.rotationDeg[2]),
+    );
+    world.createCollider(
+      d
+        .setDensity(p.density!)
+        .setTranslation(p.position[0], p.position[1], p.position[2])
+        .setRotation({ x: q[0], y: q[1], z: q[2], w: q[3] }),
+      rb,
+    );
   }
   rb.recomputeMassPropertiesFromColliders();
   rb.principalInertia();
@@ -81,12 +90,30 @@ export async function runEngineBench(): Promise<string> {
 
   // 2. 3×3 symmetric eigen-solve.
   const A = new Float64Array([4, 1, 0.5, 1, 3, 0.2, 0.5, 0.2, 1]);
-  const vals = new Float64Array(3), vecs = new Float64Array(9);
-  const rows3 = [[4, 1, 0.5], [1, 3, 0.2], [0.5, 0.2, 1]];
+  const vals = new Float64Array(3),
+    vecs = new Float64Array(9);
+  const rows3 = [
+    [4, 1, 0.5],
+    [1, 3, 0.2],
+    [0.5, 0.2, 1],
+  ];
   const batch = 1000;
-  const jac = medianMicros(() => { for (let i = 0; i < batch; i++) jacobiEigen(A, vals, vecs); }, 200) / batch;
-  const mlm = medianMicros(() => { for (let i = 0; i < 100; i++) new EigenvalueDecomposition(new Matrix(rows3), { assumeSymmetric: true }); }, 100) / 100;
-  const mjs = medianMicros(() => { for (let i = 0; i < 20; i++) eigs(rows3, { precision: 1e-15 }); }, 50, 5) / 20;
+  const jac =
+    medianMicros(() => {
+      for (let i = 0; i < batch; i++) jacobiEigen(A, vals, vecs);
+    }, 200) / batch;
+  const mlm =
+    medianMicros(() => {
+      for (let i = 0; i < 100; i++) new EigenvalueDecomposition(new Matrix(rows3), { assumeSymmetric: true });
+    }, 100) / 100;
+  const mjs =
+    medianMicros(
+      () => {
+        for (let i = 0; i < 20; i++) eigs(rows3, { precision: 1e-15 });
+      },
+      50,
+      5,
+    ) / 20;
   record('eigen-solve 3×3: cyclic Jacobi (ours)', jac, 'µs');
   record('eigen-solve 3×3: ml-matrix EigenvalueDecomposition', mlm, 'µs', `${(mlm / jac).toFixed(1)}× ours`);
   record('eigen-solve 3×3: mathjs eigs', mjs, 'µs', `${(mjs / jac).toFixed(1)}× ours`);
@@ -99,16 +126,44 @@ export async function runEngineBench(): Promise<string> {
   const target = new Float32Array(soup.length);
   const words = new Uint32Array(bytes.buffer, 0, bytes.length >>> 2);
   let sink = 0;
-  const plain = medianMicros(() => { let s = 0; for (let i = 0; i < words.length; i++) s = (s + words[i]) | 0; sink ^= s; }, 15, 3) / 1e3;
-  const parseOnly = medianMicros(() => { parseStl(bytes, { target }); }, 15, 3) / 1e3;
-  const parseIntegrate = medianMicros(() => {
-    const r = parseStl(bytes, { target });
-    if (!r.ok) throw new Error('bench STL refused');
-    integrateTriangleSoup(undefined, r.mesh.corners, r.mesh.triangleCount, 0.001, r.mesh.mean);
-  }, 15, 3) / 1e3;
+  const plain =
+    medianMicros(
+      () => {
+        let s = 0;
+        for (let i = 0; i < words.length; i++) s = (s + words[i]) | 0;
+        sink ^= s;
+      },
+      15,
+      3,
+    ) / 1e3;
+  const parseOnly =
+    medianMicros(
+      () => {
+        parseStl(bytes, { target });
+      },
+      15,
+      3,
+    ) / 1e3;
+  const parseIntegrate =
+    medianMicros(
+      () => {
+        const r = parseStl(bytes, { target });
+        if (!r.ok) throw new Error('bench STL refused');
+        integrateTriangleSoup(undefined, r.mesh.corners, r.mesh.triangleCount, 0.001, r.mesh.mean);
+      },
+      15,
+      3,
+    ) / 1e3;
   const parsed = parseStl(bytes, { target });
   if (!parsed.ok) throw new Error('bench STL refused');
-  const validate = medianMicros(() => { meshMassProperties(parsed.mesh); }, 5, 1) / 1e3;
+  const validate =
+    medianMicros(
+      () => {
+        meshMassProperties(parsed.mesh);
+      },
+      5,
+      1,
+    ) / 1e3;
   const crossing: number[] = [];
   for (let run = 0; run < 3; run++) {
     const t0 = process.hrtime.bigint();
@@ -122,9 +177,19 @@ export async function runEngineBench(): Promise<string> {
   rb.recomputeMassPropertiesFromColliders();
   const rapierMesh = Number(process.hrtime.bigint() - a0) / 1e6;
   world.removeRigidBody(rb);
-  record(`STL ${triangles} triangles (${(bytes.length / 1e6).toFixed(0)} MB): one plain pass over the bytes`, plain, 'ms', 'the memory limit');
+  record(
+    `STL ${triangles} triangles (${(bytes.length / 1e6).toFixed(0)} MB): one plain pass over the bytes`,
+    plain,
+    'ms',
+    'the memory limit',
+  );
   record('STL: parse only (into a reused buffer)', parseOnly, 'ms');
-  record('STL: parse + integration', parseIntegrate, 'ms', `${(parseIntegrate / plain).toFixed(2)}× the plain pass; ${((triangles / parseIntegrate) * 1e3 / 1e6).toFixed(1)} M triangles/s`);
+  record(
+    'STL: parse + integration',
+    parseIntegrate,
+    'ms',
+    `${(parseIntegrate / plain).toFixed(2)}× the plain pass; ${(((triangles / parseIntegrate) * 1e3) / 1e6).toFixed(1)} M triangles/s`,
+  );
   record('STL: weld + topology check + integration (upload path)', validate, 'ms');
   record('STL: search for a surface crossing itself (upload path)', crossing[1], 'ms', 'median of 3; three-mesh-bvh');
   record('STL: rapier3d-compat trimesh mass properties', rapierMesh, 'ms', 'one run');
@@ -133,10 +198,27 @@ export async function runEngineBench(): Promise<string> {
   const I = [6.5, 5, 2.5];
   const state = { L: new Float64Array([0.1, 5, 0.05]), q: new Float64Array([0, 0, 0, 1]) };
   const steps = 100_000;
-  const s2 = medianMicros(() => { for (let i = 0; i < steps; i++) splittingStep(state, I, 1e-3); }, 9, 2);
-  const s4 = medianMicros(() => { for (let i = 0; i < steps; i++) splittingStep4(state, I, 1e-3); }, 9, 2);
-  record('Lie–Poisson splitting step (2nd order)', (steps / s2) * 1e6 / 1e6, 'M/s', `${((s2 * 1e3) / steps).toFixed(0)} ns a step`);
-  record('Lie–Poisson splitting step (4th-order composition)', (steps / s4) * 1e6 / 1e6, 'M/s', `${((s4 * 1e3) / steps).toFixed(0)} ns a step`);
+  const s2 = medianMicros(
+    () => {
+      for (let i = 0; i < steps; i++) splittingStep(state, I, 1e-3);
+    },
+    9,
+    2,
+  );
+  const s4 = medianMicros(
+    () => {
+      for (let i = 0; i < steps; i++) splittingStep4(state, I, 1e-3);
+    },
+    9,
+    2,
+  );
+  record('Lie–Poisson splitting step (2nd order)', ((steps / s2) * 1e6) / 1e6, 'M/s', `${((s2 * 1e3) / steps).toFixed(0)} ns a step`);
+  record(
+    'Lie–Poisson splitting step (4th-order composition)',
+    ((steps / s4) * 1e6) / 1e6,
+    'M/s',
+    `${((s4 * 1e3) / steps).toFixed(0)} ns a step`,
+  );
 
   // 5. Scatter study: 10,000 samples × 50 primitives.
   const part50 = randomPart(50) as { primitives: { tolerance?: unknown }[] };

@@ -8,7 +8,9 @@ import { runWebBench, WEB_BENCHES, type WebBench } from './web/web-bench';
 async function main(): Promise<void> {
   const args = process.argv.slice(2);
   const wanted = (group: string) => args.length === 0 || args.some((a) => a === group || a.startsWith(`${group}:`));
-  const unknown = args.filter((a) => !/^(engine|web)(:.*)?$/.test(a) || (a.startsWith('web:') && !WEB_BENCHES.includes(a.slice(4) as WebBench)));
+  const unknown = args.filter(
+    (a) => !/^(engine|web)(:.*)?$/.test(a) || (a.startsWith('web:') && !WEB_BENCHES.includes(a.slice(4) as WebBench)),
+  );
   if (unknown.length) throw new Error(`unknown benchmark ${unknown.join(', ')}: use engine, web or web:${WEB_BENCHES.join('|web:')}`);
   console.log(`Node ${process.version}, ${new Date().toISOString()}`);
   if (wanted('engine')) {
@@ -22,7 +24,10 @@ async function main(): Promise<void> {
   }
 }
 
-main().then(() => process.exit(process.exitCode ?? 0), (e) => {
-  console.error(e);
-  process.exit(1);
-});
+main().then(
+  () => process.exit(process.exitCode ?? 0),
+  (e) => {
+    console.error(e);
+    process.exit(1);
+  },
+);

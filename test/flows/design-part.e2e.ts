@@ -31,10 +31,10 @@ async function setField(page: Page, name: string, value: string): Promise<void> 
 
 /** Waits until a form field shows `value`. */
 async function waitForFieldValue(page: Page, name: string, value: string): Promise<void> {
-  await page.waitForFunction(
-    ([selector, expected]) => document.querySelector<HTMLInputElement>(selector)?.value === expected,
-    [`[data-testid="field-${name}"]`, value] as const,
-  );
+  await page.waitForFunction(([selector, expected]) => document.querySelector<HTMLInputElement>(selector)?.value === expected, [
+    `[data-testid="field-${name}"]`,
+    value,
+  ] as const);
 }
 
 /** Waits until the live report shows `verdict` for the document as it now stands. */
@@ -57,8 +57,14 @@ jest.setTimeout(300_000);
 
 let designerBrowser: Awaited<ReturnType<typeof openBrowser>>;
 let reviewerBrowser: Awaited<ReturnType<typeof openBrowser>>;
-beforeAll(async () => { designerBrowser = await openBrowser(); reviewerBrowser = await openBrowser(); });
-afterAll(async () => { await designerBrowser?.close(); await reviewerBrowser?.close(); });
+beforeAll(async () => {
+  designerBrowser = await openBrowser();
+  reviewerBrowser = await openBrowser();
+});
+afterAll(async () => {
+  await designerBrowser?.close();
+  await reviewerBrowser?.close();
+});
 
 /** What the first step made, for the steps after it. */
 const made = { partUrl: '', workspaceId: '', partId: '', token: '', variants: [] as { id: string; number: number }[] };
@@ -180,7 +186,9 @@ it('creates a project and a part, sketches it from three primitives, watches the
 });
 
 it('plays the tumble preview of the flip-prone variant: the 3-D view and the polhode change between frames', async () => {
-  const session = await api<{ accessToken: string; memberships: { workspace: { id: string; name: string } }[] }>('/auth/signin', null, { body: { email: DESIGNER, password: DEMO_PASSWORD } });
+  const session = await api<{ accessToken: string; memberships: { workspace: { id: string; name: string } }[] }>('/auth/signin', null, {
+    body: { email: DESIGNER, password: DEMO_PASSWORD },
+  });
   made.token = session.accessToken;
   made.workspaceId = session.memberships.find((m) => m.workspace.name === 'Kestrel Bay Sports Lab')!.workspace.id;
   made.partId = /\/parts\/([^/]+)$/.exec(made.partUrl)![1];
@@ -223,7 +231,11 @@ it('compares the two variants from the editor and downloads a spin report as PDF
   await expectAccessible(page, 'design-13-compare');
   const [pdf] = await Promise.all([page.waitForEvent('download'), byTestId(page, 'compare-pdf-0').click()]);
   expect(pdf.suggestedFilename()).toMatch(/-spin-report\.pdf$/);
-  expect(readFileSync((await pdf.path())!).subarray(0, 5).toString('latin1')).toBe('%PDF-');
+  expect(
+    readFileSync((await pdf.path())!)
+      .subarray(0, 5)
+      .toString('latin1'),
+  ).toBe('%PDF-');
   const [csv] = await Promise.all([page.waitForEvent('download'), byTestId(page, 'compare-csv').click()]);
   expect(readFileSync((await csv.path())!, 'utf8')).toContain('figure,unit,');
 });
@@ -274,7 +286,9 @@ it('asks the demo reviewer for a review; the reviewer follows the e-mail link an
   await byTestId(other, 'review-decision-body').fill('Confirmed from the polhode: the face spin turns over.');
   await byTestId(other, 'review-approve').click();
   await reviewPanel.locator('[data-testid="status-chip"][data-status="approved"]').waitFor();
-  await expect(reviewPanel.locator('[data-testid="review-entry"][data-kind="approved"]').innerText()).resolves.toContain('Confirmed from the polhode');
+  await expect(reviewPanel.locator('[data-testid="review-entry"][data-kind="approved"]').innerText()).resolves.toContain(
+    'Confirmed from the polhode',
+  );
   await expectAccessible(other, 'design-17-reviewer-approved');
 
   const thread = await api<{ status: string }>(`/workspaces/${made.workspaceId}/variants/${v1.id}/review`, made.token);

@@ -7,8 +7,12 @@ import { byTestId, DEMO_PASSWORD, expectAccessible } from '../support/flow-helpe
  * the app's own not-found page rather than the server's "Cannot GET".
  */
 let browser: Awaited<ReturnType<typeof openBrowser>>;
-beforeAll(async () => { browser = await openBrowser(); });
-afterAll(async () => { await browser?.close(); });
+beforeAll(async () => {
+  browser = await openBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+});
 
 it('opens the printed home address, signs in, reloads deep links and shows the not-found page', async () => {
   const page = browser.page;

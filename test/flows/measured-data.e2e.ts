@@ -37,22 +37,33 @@ async function api<T>(path: string, token: string): Promise<T> {
 type Report = { principal: { moments: number[] }; trade: { swingweight: number | null; twistweight: number | null } };
 
 let browser: Awaited<ReturnType<typeof openBrowser>>;
-beforeAll(async () => { browser = await openBrowser(); });
-afterAll(async () => { await browser?.close(); });
+beforeAll(async () => {
+  browser = await openBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+});
 
 it('shows the seeded rig readings against the prediction, refuses a bad CSV by line, imports a good one, undoes it and removes a reading', async () => {
   const { page } = browser;
 
   // The seeded variants of the racket frame, read through the API to know what to expect.
-  const session = await (await fetch(`${baseUrl()}/api/v1/auth/signin`, {
-    method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: DESIGNER, password: DEMO_PASSWORD }),
-  })).json() as { accessToken: string; memberships: { workspace: { id: string; name: string } }[] };
+  const session = (await (
+    await fetch(`${baseUrl()}/api/v1/auth/signin`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ email: DESIGNER, password: DEMO_PASSWORD }),
+    })
+  ).json()) as { accessToken: string; memberships: { workspace: { id: string; name: string } }[] };
   const ws = session.memberships.find((m) => m.workspace.name === 'Kestrel Bay Sports Lab')!.workspace.id;
   const projects = await api<{ id: string; name: string }[]>(`/workspaces/${ws}/projects`, session.accessToken);
   const racketProject = projects.find((p) => p.name === 'Junior racket')!;
   const parts = await api<{ id: string; name: string }[]>(`/workspaces/${ws}/projects/${racketProject.id}/parts`, session.accessToken);
   const frame = parts.find((p) => p.name === 'Frame')!;
-  const variants = await api<{ id: string; number: number; report: Report }[]>(`/workspaces/${ws}/parts/${frame.id}/variants`, session.accessToken);
+  const variants = await api<{ id: string; number: number; report: Report }[]>(
+    `/workspaces/${ws}/parts/${frame.id}/variants`,
+    session.accessToken,
+  );
   const measured = variants.find((v) => v.number === 2)!;
   const seeded = await api<unknown[]>(`/workspaces/${ws}/variants/${measured.id}/measurements`, session.accessToken);
   expect(seeded.length).toBeGreaterThanOrEqual(1);
@@ -63,7 +74,9 @@ it('shows the seeded rig readings against the prediction, refuses a bad CSV by l
   await byTestId(page, 'signin-password').fill(DEMO_PASSWORD);
   await byTestId(page, 'signin-submit').click();
   await byTestId(page, 'user-menu').waitFor();
-  await byTestId(page, 'project-link').filter({ hasText: /^Junior racket$/ }).click();
+  await byTestId(page, 'project-link')
+    .filter({ hasText: /^Junior racket$/ })
+    .click();
   await page.locator(`[data-testid="part-row"][data-part-id="${frame.id}"] [data-testid="part-link"]`).click();
   await byTestId(page, 'editor-measurements').click();
   await page.waitForURL(/\/measurements\?variant=/);
@@ -84,14 +97,20 @@ it('shows the seeded rig readings against the prediction, refuses a bad CSV by l
   await expectAccessible(page, 'measured-data-2-seeded');
 
   // A CSV with two bad rows: every problem by line, nothing imported.
-  const bad = 'axis,value,unit,method\nmajor,250000,g·cm²,compound pendulum\nminor,-4,g·cm²,compound pendulum\nswing,1800,furlongs,swing rig\n';
+  const bad =
+    'axis,value,unit,method\nmajor,250000,g·cm²,compound pendulum\nminor,-4,g·cm²,compound pendulum\nswing,1800,furlongs,swing rig\n';
   await byTestId(page, 'measurements-file').setInputFiles({ name: 'frame-rig-bad.csv', mimeType: 'text/csv', buffer: Buffer.from(bad) });
   await byTestId(page, 'measurements-problems').waitFor();
   const problems = await byTestId(page, 'measurements-problem').allInnerTexts();
-  expect(problems).toEqual(['Line 3: value "-4" must be a positive number', expect.stringMatching(/^Line 4: unit "furlongs" must be one of/)]);
+  expect(problems).toEqual([
+    'Line 3: value "-4" must be a positive number',
+    expect.stringMatching(/^Line 4: unit "furlongs" must be one of/),
+  ]);
   await expect(byTestId(page, 'measurements-problems').innerText()).resolves.toContain('Nothing was imported.');
   await expect(rows(page).count()).resolves.toBe(seeded.length);
-  await expect(api<unknown[]>(`/workspaces/${ws}/variants/${measured.id}/measurements`, session.accessToken).then((r) => r.length)).resolves.toBe(seeded.length);
+  await expect(
+    api<unknown[]>(`/workspaces/${ws}/variants/${measured.id}/measurements`, session.accessToken).then((r) => r.length),
+  ).resolves.toBe(seeded.length);
   await expectAccessible(page, 'measured-data-3-refused');
 
   // A good CSV: one reading 8 % above the smallest principal moment (flagged), one 1 % under the
@@ -137,7 +156,9 @@ it('shows the seeded rig readings against the prediction, refuses a bad CSV by l
   await page.locator('[data-testid="measurement-row"][data-fresh="true"]').first().waitFor({ state: 'detached' });
   await expect(rows(page).count()).resolves.toBe(seeded.length);
   await expect(byTestId(page, 'measurements-undo-import').count()).resolves.toBe(0);
-  await expect(api<unknown[]>(`/workspaces/${ws}/variants/${measured.id}/measurements`, session.accessToken).then((r) => r.length)).resolves.toBe(seeded.length);
+  await expect(
+    api<unknown[]>(`/workspaces/${ws}/variants/${measured.id}/measurements`, session.accessToken).then((r) => r.length),
+  ).resolves.toBe(seeded.length);
   await expectAccessible(page, 'measured-data-6-import-undone');
 
   // Remove one seeded reading with its row's button (named after the reading), after confirming.

@@ -36,7 +36,13 @@ function boxTriangles(a: number, b: number, c: number): Tri[] {
     [v(0, 0, 0), v(0, 0, 1), v(0, 1, 1), v(0, 1, 0)],
     [v(1, 0, 0), v(1, 1, 0), v(1, 1, 1), v(1, 0, 1)],
   ];
-  return quads.flatMap(([p, q, r, s]) => [[p, q, r], [p, r, s]] as Tri[]);
+  return quads.flatMap(
+    ([p, q, r, s]) =>
+      [
+        [p, q, r],
+        [p, r, s],
+      ] as Tri[],
+  );
 }
 
 /** A binary STL: 80-byte header, triangle count, then 50 bytes a triangle (normal, corners, attribute). */
@@ -186,7 +192,9 @@ it('keeps the upload this primitive uses and deletes one nothing uses, after a c
   await expect(byTestId(page, 'mesh-delete-note').innerText()).resolves.toMatch(/“box-copy” is the mesh of this primitive/);
 
   // The first box is free once the draft holding the new choice is saved (autosave).
-  const session = await api<{ accessToken: string; memberships: { workspace: { id: string } }[] }>('/auth/signin', null, { body: designer });
+  const session = await api<{ accessToken: string; memberships: { workspace: { id: string } }[] }>('/auth/signin', null, {
+    body: designer,
+  });
   const workspaceId = session.memberships[0].workspace.id;
   const meshes = await api<{ id: string; name: string }[]>(`/workspaces/${workspaceId}/meshes`, session.accessToken);
   const first = meshes.find((m) => m.name === 'box-40x30x200');
@@ -216,7 +224,9 @@ it('keeps the upload this primitive uses and deletes one nothing uses, after a c
 it('shows how much of a slow upload is sent', async () => {
   const page = browser.page;
   // 2000 boxes side by side (24 000 triangles, 1.2 MB), sent at 0.4 MB/s: about three seconds of upload.
-  const boxes = Array.from({ length: 2000 }, (_, k) => boxTriangles(BOX.a, BOX.b, BOX.c).map((t) => t.map(([x, y, z]) => [x + (k % 50) * 50, y + Math.floor(k / 50) * 40, z]) as Tri)).flat();
+  const boxes = Array.from({ length: 2000 }, (_, k) =>
+    boxTriangles(BOX.a, BOX.b, BOX.c).map((t) => t.map(([x, y, z]) => [x + (k % 50) * 50, y + Math.floor(k / 50) * 40, z]) as Tri),
+  ).flat();
   const bigFile = path.join(dir, 'box-rack.stl');
   writeFileSync(bigFile, binaryStl(boxes));
   const cdp = await page.context().newCDPSession(page);
@@ -224,7 +234,9 @@ it('shows how much of a slow upload is sent', async () => {
   await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: 400_000 });
   try {
     await uploadThroughChooser(page, bigFile);
-    await byTestId(page, 'mesh-progress').filter({ hasText: /Uploading box-rack\.stl… \d+ %/ }).waitFor();
+    await byTestId(page, 'mesh-progress')
+      .filter({ hasText: /Uploading box-rack\.stl… \d+ %/ })
+      .waitFor();
     await screenshot(page, 'mesh-07-upload-progress');
   } finally {
     await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: -1 });

@@ -9,7 +9,12 @@ import { accessibilityViolations, baseUrl, openBrowser, screenshot } from '../su
  * screenshotted and checked with axe.
  */
 const stamp = Date.now().toString(36);
-const owner = { workspace: `Skipjack Disc Works ${stamp}`, name: 'Odile Brenner', email: `odile.${stamp}@example.test`, password: 'skipjack-pass-1' };
+const owner = {
+  workspace: `Skipjack Disc Works ${stamp}`,
+  name: 'Odile Brenner',
+  email: `odile.${stamp}@example.test`,
+  password: 'skipjack-pass-1',
+};
 const mates = ['wren', 'tamsin', 'ilya'].map((name) => `${name}.${stamp}@example.test`);
 const operator = { email: 'operator@tumblewise.test', password: 'kestrel-demo-2026' };
 const expiry = `12/${String((new Date().getFullYear() + 3) % 100).padStart(2, '0')}`;
@@ -43,8 +48,14 @@ async function invite(page: Page, email: string): Promise<Response> {
 
 let ownerBrowser: Awaited<ReturnType<typeof openBrowser>>;
 let operatorBrowser: Awaited<ReturnType<typeof openBrowser>>;
-beforeAll(async () => { ownerBrowser = await openBrowser(); operatorBrowser = await openBrowser(); });
-afterAll(async () => { await ownerBrowser?.close(); await operatorBrowser?.close(); });
+beforeAll(async () => {
+  ownerBrowser = await openBrowser();
+  operatorBrowser = await openBrowser();
+});
+afterAll(async () => {
+  await ownerBrowser?.close();
+  await operatorBrowser?.close();
+});
 
 it('buys seats, meets the seat limit, adds a seat; an operator suspends and restores the workspace', async () => {
   const page = ownerBrowser.page;
@@ -193,7 +204,9 @@ it('buys seats, meets the seat limit, adds a seat; an operator suspends and rest
   await page.goto(`${baseUrl()}/admin/audit`);
   await byTestId(page, 'audit-row').first().waitFor();
   expect(await byTestId(page, 'workspace-state-banner').count()).toBe(0);
-  const billingOnly = page.waitForResponse((r) => new URL(r.url()).pathname.endsWith('/audit') && new URL(r.url()).searchParams.get('action') === 'billing.');
+  const billingOnly = page.waitForResponse(
+    (r) => new URL(r.url()).pathname.endsWith('/audit') && new URL(r.url()).searchParams.get('action') === 'billing.',
+  );
   await byTestId(page, 'audit-billing-filter').click();
   await billingOnly;
   await byTestId(page, 'audit-row').filter({ hasText: 'Invitation sent' }).first().waitFor({ state: 'detached' });

@@ -8,7 +8,12 @@ import { linkToken, waitForMail } from '../../server/src/test-support/mail-inbox
  * the new member. Every screen is screenshotted and checked with axe.
  */
 const stamp = Date.now().toString(36);
-const owner = { workspace: `Gullwing Throwing Lab ${stamp}`, name: 'Aster Vale', email: `aster.${stamp}@example.test`, password: 'gullwing-pass-1' };
+const owner = {
+  workspace: `Gullwing Throwing Lab ${stamp}`,
+  name: 'Aster Vale',
+  email: `aster.${stamp}@example.test`,
+  password: 'gullwing-pass-1',
+};
 const mate = { name: 'Bram Okafor-Lind', email: `bram.${stamp}@example.test`, password: 'teammate-pass-1' };
 
 const byTestId = (page: Page, id: string) => page.locator(`[data-testid="${id}"]`);
@@ -20,8 +25,14 @@ async function expectAccessible(page: Page, screen: string): Promise<void> {
 
 let first: Awaited<ReturnType<typeof openBrowser>>;
 let second: Awaited<ReturnType<typeof openBrowser>>;
-beforeAll(async () => { first = await openBrowser(); second = await openBrowser(); });
-afterAll(async () => { await first?.close(); await second?.close(); });
+beforeAll(async () => {
+  first = await openBrowser();
+  second = await openBrowser();
+});
+afterAll(async () => {
+  await first?.close();
+  await second?.close();
+});
 
 it('signs up, signs out, signs in, invites a teammate who accepts from the e-mail, and lists them', async () => {
   const page = first.page;

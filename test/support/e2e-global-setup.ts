@@ -19,16 +19,34 @@ export default async function globalSetup(): Promise<void> {
   const port = await freePort();
   const services = await startLocalServices({
     ports: { postgres: await freePort(), smtp: await freePort(), mailWeb: await freePort(), payment: await freePort() },
-    clusterDir: path.join(root, 'postgres'), mailDir: path.join(root, 'maildev'), throwaway: true, database: 'tumblewise_e2e',
+    clusterDir: path.join(root, 'postgres'),
+    mailDir: path.join(root, 'maildev'),
+    throwaway: true,
+    database: 'tumblewise_e2e',
     webhookUrl: `http://127.0.0.1:${port}/api/v1/billing/webhook`,
   });
   const env = {
-    ...process.env, ...services.env, DATA_DIR: path.join(root, 'data'), PORT: String(port), NODE_ENV: 'test', BCRYPT_COST: '4',
-    LOG_LEVEL: 'warn', SEED_DEMO: 'true', RATE_LIMIT_SIGNIN: '1000', RATE_LIMIT_SIGNUP: '1000', RATE_LIMIT_PASSWORD_RESET: '1000',
+    ...process.env,
+    ...services.env,
+    DATA_DIR: path.join(root, 'data'),
+    PORT: String(port),
+    NODE_ENV: 'test',
+    BCRYPT_COST: '4',
+    LOG_LEVEL: 'warn',
+    SEED_DEMO: 'true',
+    RATE_LIMIT_SIGNIN: '1000',
+    RATE_LIMIT_SIGNUP: '1000',
+    RATE_LIMIT_PASSWORD_RESET: '1000',
   };
-  const server = spawn(process.execPath, [path.join(projectRoot, 'node_modules/tsx/dist/cli.mjs'), path.join(projectRoot, 'server/src/main.ts')], {
-    cwd: projectRoot, env, stdio: ['ignore', 'inherit', 'inherit'],
-  });
+  const server = spawn(
+    process.execPath,
+    [path.join(projectRoot, 'node_modules/tsx/dist/cli.mjs'), path.join(projectRoot, 'server/src/main.ts')],
+    {
+      cwd: projectRoot,
+      env,
+      stdio: ['ignore', 'inherit', 'inherit'],
+    },
+  );
   try {
     await waitForPort(port, 30000);
   } catch (err) {

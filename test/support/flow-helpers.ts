@@ -55,7 +55,8 @@ export function drawnShare(page: Page, testId: string): Promise<number> {
     ctx.drawImage(source, 0, 0);
     const data = ctx.getImageData(0, 0, copy.width, copy.height).data;
     const [r0, g0, b0] = [data[0], data[1], data[2]];
-    let differing = 0, total = 0;
+    let differing = 0,
+      total = 0;
     for (let i = 0; i < data.length; i += 4 * 97) {
       total++;
       if (Math.abs(data[i] - r0) + Math.abs(data[i + 1] - g0) + Math.abs(data[i + 2] - b0) > 24) differing++;

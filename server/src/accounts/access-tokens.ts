@@ -36,7 +36,10 @@ export class AccessTokens {
 
   sign(claims: AccessClaims): string {
     return jwt.sign({ sid: claims.sessionId }, this.key, {
-      algorithm: 'HS256', subject: claims.userId, issuer: this.config.issuer, audience: this.config.audience,
+      algorithm: 'HS256',
+      subject: claims.userId,
+      issuer: this.config.issuer,
+      audience: this.config.audience,
       expiresIn: this.config.accessTokenSeconds,
     });
   }
@@ -46,8 +49,13 @@ export class AccessTokens {
     const known = this.verified.get(token);
     if (known) return known;
     try {
-      const payload = jwt.verify(token, this.key, { algorithms: ['HS256'], issuer: this.config.issuer, audience: this.config.audience }) as jwt.JwtPayload;
-      if (typeof payload.sub !== 'string' || typeof payload.sid !== 'string' || typeof payload.exp !== 'number') throw new Error('claims missing');
+      const payload = jwt.verify(token, this.key, {
+        algorithms: ['HS256'],
+        issuer: this.config.issuer,
+        audience: this.config.audience,
+      }) as jwt.JwtPayload;
+      if (typeof payload.sub !== 'string' || typeof payload.sid !== 'string' || typeof payload.exp !== 'number')
+        throw new Error('claims missing');
       const claims = { userId: payload.sub, sessionId: payload.sid };
       // Forgotten the moment it expires; then jwt.verify above answers "expired" as before.
       this.verified.set(token, claims, { ttl: Math.max(1, payload.exp * 1000 - Date.now()) });

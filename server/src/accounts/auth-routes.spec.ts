@@ -5,8 +5,12 @@ import { linkToken, waitForMail } from '../test-support/mail-inbox';
 import { hashToken } from './secure-token';
 
 let t: TestApp;
-beforeAll(async () => { t = await startTestApp(); });
-afterAll(async () => { await t.close(); });
+beforeAll(async () => {
+  t = await startTestApp();
+});
+afterAll(async () => {
+  await t.close();
+});
 
 describe('sign-up and sign-in', () => {
   it('creates a workspace with its owner and signs them in', async () => {
@@ -21,7 +25,10 @@ describe('sign-up and sign-in', () => {
   });
 
   it('sets the refresh token as an httpOnly SameSite cookie and stores only its hash', async () => {
-    const res = await request(t.app).post('/api/v1/auth/signup').send({ workspaceName: 'Cookie Lab', name: 'C', email: 'cookie@example.test', password: 'correct-horse-42' }).expect(201);
+    const res = await request(t.app)
+      .post('/api/v1/auth/signup')
+      .send({ workspaceName: 'Cookie Lab', name: 'C', email: 'cookie@example.test', password: 'correct-horse-42' })
+      .expect(201);
     const header = (res.headers['set-cookie'] as unknown as string[]).find((c) => c.startsWith('tw_refresh='))!;
     expect(header).toMatch(/HttpOnly/);
     expect(header).toMatch(/SameSite=Strict/);
@@ -33,7 +40,10 @@ describe('sign-up and sign-in', () => {
 
   it('refuses a second account with the same e-mail (409 naming email)', async () => {
     await signUp(t.app, { email: 'twice@example.test' });
-    const res = await request(t.app).post('/api/v1/auth/signup').send({ workspaceName: 'Other', name: 'X', email: 'twice@example.test', password: 'correct-horse-42' }).expect(409);
+    const res = await request(t.app)
+      .post('/api/v1/auth/signup')
+      .send({ workspaceName: 'Other', name: 'X', email: 'twice@example.test', password: 'correct-horse-42' })
+      .expect(409);
     expect(res.body.error).toMatchObject({ code: 'email_taken', field: 'email' });
   });
 
@@ -42,20 +52,35 @@ describe('sign-up and sign-in', () => {
     const ok = await request(t.app).post('/api/v1/auth/signin').send({ email: s.user.email, password: s.password }).expect(200);
     expect(ok.body.accessToken).toEqual(expect.any(String));
     const wrong = await request(t.app).post('/api/v1/auth/signin').send({ email: s.user.email, password: 'not-the-password' }).expect(401);
-    const unknown = await request(t.app).post('/api/v1/auth/signin').send({ email: 'nobody@example.test', password: 'not-the-password' }).expect(401);
+    const unknown = await request(t.app)
+      .post('/api/v1/auth/signin')
+      .send({ email: 'nobody@example.test', password: 'not-the-password' })
+      .expect(401);
     expect(wrong.body).toEqual(unknown.body);
     expect(wrong.body.error.code).toBe('invalid_credentials');
   });
 
   it('enforces the password length 10–72 characters', async () => {
-    const short = await request(t.app).post('/api/v1/auth/signup').send({ workspaceName: 'W1', name: 'N', email: 'short@example.test', password: 'nine-char' }).expect(400);
+    const short = await request(t.app)
+      .post('/api/v1/auth/signup')
+      .send({ workspaceName: 'W1', name: 'N', email: 'short@example.test', password: 'nine-char' })
+      .expect(400);
     expect(short.body.error.field).toBe('password');
-    const long = await request(t.app).post('/api/v1/auth/signup').send({ workspaceName: 'W1', name: 'N', email: 'long@example.test', password: 'x'.repeat(73) }).expect(400);
+    const long = await request(t.app)
+      .post('/api/v1/auth/signup')
+      .send({ workspaceName: 'W1', name: 'N', email: 'long@example.test', password: 'x'.repeat(73) })
+      .expect(400);
     expect(long.body.error.field).toBe('password');
     // 72 characters but more than 72 bytes: bcrypt would silently ignore the tail.
-    const bytes = await request(t.app).post('/api/v1/auth/signup').send({ workspaceName: 'W1', name: 'N', email: 'bytes@example.test', password: 'é'.repeat(40) }).expect(400);
+    const bytes = await request(t.app)
+      .post('/api/v1/auth/signup')
+      .send({ workspaceName: 'W1', name: 'N', email: 'bytes@example.test', password: 'é'.repeat(40) })
+      .expect(400);
     expect(bytes.body.error.field).toBe('password');
-    await request(t.app).post('/api/v1/auth/signup').send({ workspaceName: 'W1', name: 'N', email: 'exact@example.test', password: 'x'.repeat(72) }).expect(201);
+    await request(t.app)
+      .post('/api/v1/auth/signup')
+      .send({ workspaceName: 'W1', name: 'N', email: 'exact@example.test', password: 'x'.repeat(72) })
+      .expect(201);
     expect(await User.count({ where: { email: ['short@example.test', 'long@example.test', 'bytes@example.test'] } })).toBe(0);
   });
 });
@@ -64,9 +89,17 @@ describe('access tokens', () => {
   it('rejects a token signed with another key, a wrong audience and a garbled header', async () => {
     const jwt = await import('jsonwebtoken');
     const s = await signUp(t.app);
-    const foreign = jwt.default.sign({ sid: 'x' }, 'another-secret-another-secret-another', { subject: s.user.id, issuer: 'tumblewise', audience: 'tumblewise-api' });
+    const foreign = jwt.default.sign({ sid: 'x' }, 'another-secret-another-secret-another', {
+      subject: s.user.id,
+      issuer: 'tumblewise',
+      audience: 'tumblewise-api',
+    });
     expect((await request(t.app).get('/api/v1/me').set(bearer(foreign)).expect(401)).body.error.code).toBe('token_invalid');
-    const wrongAudience = jwt.default.sign({ sid: 'x' }, t.ctx.config.auth.jwtSecret, { subject: s.user.id, issuer: 'tumblewise', audience: 'someone-else' });
+    const wrongAudience = jwt.default.sign({ sid: 'x' }, t.ctx.config.auth.jwtSecret, {
+      subject: s.user.id,
+      issuer: 'tumblewise',
+      audience: 'someone-else',
+    });
     await request(t.app).get('/api/v1/me').set(bearer(wrongAudience)).expect(401);
     const none = jwt.default.sign({ sid: 'x', sub: s.user.id, iss: 'tumblewise', aud: 'tumblewise-api' }, '', { algorithm: 'none' });
     await request(t.app).get('/api/v1/me').set('Authorization', `Bearer ${none}`).expect(401);
@@ -138,7 +171,10 @@ describe('password reset', () => {
     await request(t.app).get('/api/v1/me').set(bearer(s.accessToken)).expect(401);
     await request(t.app).post('/api/v1/auth/signin').send({ email: s.user.email, password: s.password }).expect(401);
     await request(t.app).post('/api/v1/auth/signin').send({ email: s.user.email, password: 'a-brand-new-secret' }).expect(200);
-    const again = await request(t.app).post('/api/v1/auth/password-reset/confirm').send({ token, password: 'yet-another-secret' }).expect(410);
+    const again = await request(t.app)
+      .post('/api/v1/auth/password-reset/confirm')
+      .send({ token, password: 'yet-another-secret' })
+      .expect(410);
     expect(again.body.error.code).toBe('token_invalid');
   });
 

@@ -2,7 +2,11 @@ import { Router } from 'express';
 import { UniqueConstraintError } from 'sequelize';
 import { z } from 'zod';
 import {
-  passwordResetBodySchema, passwordResetConfirmBodySchema, sessionSchema, signinBodySchema, signupBodySchema,
+  passwordResetBodySchema,
+  passwordResetConfirmBodySchema,
+  sessionSchema,
+  signinBodySchema,
+  signupBodySchema,
 } from '@tumblewise/shared';
 import type { AppContext } from '../app-context';
 import { recordAudit } from '../audit/audit-log';
@@ -24,14 +28,22 @@ export function authRoutes(ctx: AppContext): Router {
   const auth = ctx.config.auth;
 
   route({
-    method: 'post', path: '/signup', summary: 'Create a workspace and its owner; signs the owner in.',
-    access: { kind: 'public' }, body: signupBodySchema, errors: [409, 429],
+    method: 'post',
+    path: '/signup',
+    summary: 'Create a workspace and its owner; signs the owner in.',
+    access: { kind: 'public' },
+    body: signupBodySchema,
+    errors: [409, 429],
     before: [limitAttempts(ctx.limits.signup, (req) => req.ip ?? 'unknown', 'sign-up')],
     success: { status: 201, description: 'Signed in as the new workspace owner.', schema: sessionSchema },
     handler: async ({ body }, req, res) => {
       const { workspaceName, name, email, password } = body;
       if (await User.findOne({ where: { email } })) {
-        throw AppError.conflict('email_taken', 'An account with this e-mail already exists. Sign in instead, or reset the password.', 'email');
+        throw AppError.conflict(
+          'email_taken',
+          'An account with this e-mail already exists. Sign in instead, or reset the password.',
+          'email',
+        );
       }
       const passwordHash = await ctx.passwords.hash(password);
       try {
@@ -39,22 +51,37 @@ export function authRoutes(ctx: AppContext): Router {
           const user = await User.create({ email, name, passwordHash }, { transaction });
           const workspace = await Workspace.create({ name: workspaceName }, { transaction });
           await Membership.create({ workspaceId: workspace.id, userId: user.id, role: 'owner' }, { transaction });
-          await recordAudit({ workspaceId: workspace.id, actorId: user.id, action: 'workspace.created', targetType: 'workspace', targetId: workspace.id, targetLabel: workspace.name }, transaction);
+          await recordAudit(
+            {
+              workspaceId: workspace.id,
+              actorId: user.id,
+              action: 'workspace.created',
+              targetType: 'workspace',
+              targetId: workspace.id,
+              targetLabel: workspace.name,
+            },
+            transaction,
+          );
           const started = await ctx.sessions.start(user.id, req.get('user-agent'), transaction);
           return { user, workspace, ...started };
         });
         setRefreshCookie(res, refreshToken, auth);
-        return sessionBody(ctx, user, sessionId, workspace);
+        return await sessionBody(ctx, user, sessionId, workspace);
       } catch (err) {
-        if (err instanceof UniqueConstraintError) throw AppError.conflict('email_taken', 'An account with this e-mail already exists.', 'email');
+        if (err instanceof UniqueConstraintError)
+          throw AppError.conflict('email_taken', 'An account with this e-mail already exists.', 'email');
         throw err;
       }
     },
   });
 
   route({
-    method: 'post', path: '/signin', summary: 'Sign in with e-mail and password.',
-    access: { kind: 'public' }, body: signinBodySchema, errors: [429],
+    method: 'post',
+    path: '/signin',
+    summary: 'Sign in with e-mail and password.',
+    access: { kind: 'public' },
+    body: signinBodySchema,
+    errors: [429],
     before: [limitAttempts(ctx.limits.signin, ipAndEmail, 'sign-in')],
     success: { status: 200, description: 'Signed in; the refresh token is set as an httpOnly cookie.', schema: sessionSchema },
     handler: async ({ body }, req, res) => {
@@ -70,7 +97,9 @@ export function authRoutes(ctx: AppContext): Router {
   });
 
   route({
-    method: 'post', path: '/refresh', summary: 'Exchange the refresh cookie for a new access token (the cookie rotates).',
+    method: 'post',
+    path: '/refresh',
+    summary: 'Exchange the refresh cookie for a new access token (the cookie rotates).',
     access: { kind: 'public' },
     success: { status: 200, description: 'A fresh access token.', schema: sessionSchema },
     handler: async (_input, req, res) => {
@@ -79,7 +108,7 @@ export function authRoutes(ctx: AppContext): Router {
       try {
         const { user, sessionId, refreshToken } = await ctx.sessions.rotate(presented);
         setRefreshCookie(res, refreshToken, auth);
-        return sessionBody(ctx, user, sessionId);
+        return await sessionBody(ctx, user, sessionId);
       } catch (err) {
         if (err instanceof AppError && err.status === 401) clearRefreshCookie(res, auth);
         throw err;
@@ -88,7 +117,9 @@ export function authRoutes(ctx: AppContext): Router {
   });
 
   route({
-    method: 'post', path: '/signout', summary: 'End this sign-in on every device holding it.',
+    method: 'post',
+    path: '/signout',
+    summary: 'End this sign-in on every device holding it.',
     access: { kind: 'optional-user' },
     success: { status: 204, description: 'Signed out.' },
     handler: async ({ auth: caller }, req, res) => {
@@ -101,8 +132,12 @@ export function authRoutes(ctx: AppContext): Router {
   });
 
   route({
-    method: 'post', path: '/password-reset', summary: 'E-mail a password-reset link. Answers the same whether or not the address has an account.',
-    access: { kind: 'public' }, body: passwordResetBodySchema, errors: [429],
+    method: 'post',
+    path: '/password-reset',
+    summary: 'E-mail a password-reset link. Answers the same whether or not the address has an account.',
+    access: { kind: 'public' },
+    body: passwordResetBodySchema,
+    errors: [429],
     before: [limitAttempts(ctx.limits.passwordReset, ipAndEmail, 'password-reset')],
     success: { status: 202, description: 'If the address has an account, a link is on its way.', schema: messageSchema },
     handler: async ({ body }) => {
@@ -114,8 +149,12 @@ export function authRoutes(ctx: AppContext): Router {
   });
 
   route({
-    method: 'post', path: '/password-reset/confirm', summary: 'Set a new password with the link token; ends every sign-in of the account.',
-    access: { kind: 'public' }, body: passwordResetConfirmBodySchema, errors: [410],
+    method: 'post',
+    path: '/password-reset/confirm',
+    summary: 'Set a new password with the link token; ends every sign-in of the account.',
+    access: { kind: 'public' },
+    body: passwordResetConfirmBodySchema,
+    errors: [410],
     success: { status: 200, description: 'Password changed.', schema: messageSchema },
     handler: async ({ body }) => {
       const { token, password } = body;

@@ -7,8 +7,14 @@ import { membershipsOf } from './session-body';
 /** The signed-in user and their memberships. */
 export function meRoutes(ctx: AppContext): Router {
   const router = Router();
-  routeGroup(router, ctx.catalogue, '')({
-    method: 'get', path: '/me', summary: 'The signed-in user and the workspaces they belong to.',
+  routeGroup(
+    router,
+    ctx.catalogue,
+    '',
+  )({
+    method: 'get',
+    path: '/me',
+    summary: 'The signed-in user and the workspaces they belong to.',
     access: { kind: 'user' },
     success: { status: 200, description: 'User and memberships.', schema: meSchema },
     handler: async ({ auth }) => ({ user: auth!.user.toDto(), memberships: await membershipsOf(auth!.user.id) }),

@@ -7,7 +7,10 @@ const COOKIE_PATH = '/api/v1/auth';
 /** The refresh token travels only in an httpOnly, SameSite=Strict cookie scoped to /api/v1/auth. */
 export function setRefreshCookie(res: Response, token: string, config: Config['auth']): void {
   res.cookie(REFRESH_COOKIE, token, {
-    httpOnly: true, sameSite: 'strict', secure: config.cookieSecure, path: COOKIE_PATH,
+    httpOnly: true,
+    sameSite: 'strict',
+    secure: config.cookieSecure,
+    path: COOKIE_PATH,
     maxAge: config.refreshTokenDays * 86400_000,
   });
 }

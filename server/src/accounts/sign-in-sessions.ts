@@ -10,11 +10,21 @@ import type { SignedInUsers } from './signed-in-users';
  * that was already rotated means it was copied, so the whole session (token family) is revoked.
  */
 export class SignInSessions {
-  constructor(private readonly config: Config['auth'], private readonly signedIn?: SignedInUsers) {}
+  constructor(
+    private readonly config: Config['auth'],
+    private readonly signedIn?: SignedInUsers,
+  ) {}
 
   /** Starts a session; returns it with its first refresh token (plain, for the cookie). */
-  async start(userId: string, userAgent: string | undefined, transaction?: Transaction): Promise<{ sessionId: string; refreshToken: string }> {
-    const session = await SignInSession.create({ userId, userAgent: userAgent?.slice(0, 300) ?? null, revokedAt: null, revokedReason: null }, { transaction });
+  async start(
+    userId: string,
+    userAgent: string | undefined,
+    transaction?: Transaction,
+  ): Promise<{ sessionId: string; refreshToken: string }> {
+    const session = await SignInSession.create(
+      { userId, userAgent: userAgent?.slice(0, 300) ?? null, revokedAt: null, revokedReason: null },
+      { transaction },
+    );
     const refreshToken = await this.issueToken(session.id, transaction);
     return { sessionId: session.id, refreshToken };
   }
@@ -29,9 +39,13 @@ export class SignInSessions {
     const [claimed] = await RefreshToken.update({ rotatedAt: new Date() }, { where: { id: stored.id, rotatedAt: { [Op.is]: null } } });
     if (claimed === 0) {
       await this.revoke(session.id, 'refresh_reused');
-      throw AppError.unauthorized('This sign-in was used from somewhere else, so it has been ended for safety. Sign in again.', 'refresh_reused');
+      throw AppError.unauthorized(
+        'This sign-in was used from somewhere else, so it has been ended for safety. Sign in again.',
+        'refresh_reused',
+      );
     }
-    if (stored.expiresAt.getTime() <= Date.now()) throw AppError.unauthorized('Your session has expired. Sign in again.', 'refresh_expired');
+    if (stored.expiresAt.getTime() <= Date.now())
+      throw AppError.unauthorized('Your session has expired. Sign in again.', 'refresh_expired');
     const user = await User.findByPk(session.userId);
     if (!user) throw AppError.unauthorized('This account no longer exists.', 'refresh_invalid');
     const refreshToken = await this.issueToken(session.id);
@@ -45,14 +59,20 @@ export class SignInSessions {
   }
 
   async revoke(sessionId: string, reason: string): Promise<void> {
-    await SignInSession.update({ revokedAt: new Date(), revokedReason: reason }, { where: { id: sessionId, revokedAt: { [Op.is]: null } } });
+    await SignInSession.update(
+      { revokedAt: new Date(), revokedReason: reason },
+      { where: { id: sessionId, revokedAt: { [Op.is]: null } } },
+    );
     // The database announces it to every process; this one need not wait for the notice.
     this.signedIn?.forgetSession(sessionId);
   }
 
   /** Ends every session of a user (after a password reset). */
   async revokeAllOf(userId: string, reason: string, transaction?: Transaction): Promise<void> {
-    await SignInSession.update({ revokedAt: new Date(), revokedReason: reason }, { where: { userId, revokedAt: { [Op.is]: null } }, transaction });
+    await SignInSession.update(
+      { revokedAt: new Date(), revokedReason: reason },
+      { where: { userId, revokedAt: { [Op.is]: null } }, transaction },
+    );
     // Forgotten now and again when the announcement arrives at commit (a lookup meanwhile is not kept).
     this.signedIn?.forgetUser(userId);
   }

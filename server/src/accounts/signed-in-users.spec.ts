@@ -44,7 +44,11 @@ describe('who is signed in', () => {
     const s = await signUp(t.app);
     await me(s.accessToken).expect(200);
     await sql.query(`UPDATE sign_in_sessions SET revoked_at = now(), revoked_reason = 'test' WHERE user_id = $1`, [s.user.id]);
-    const res = await eventually(() => me(s.accessToken), (r) => r.status === 401, { what: 'the revoked session to be refused', timeoutMs: 5000, intervalMs: 10 });
+    const res = await eventually(
+      () => me(s.accessToken),
+      (r) => r.status === 401,
+      { what: 'the revoked session to be refused', timeoutMs: 5000, intervalMs: 10 },
+    );
     expect(res.body.error.code).toBe('session_revoked');
   });
 
@@ -52,9 +56,17 @@ describe('who is signed in', () => {
     const s = await signUp(t.app);
     await me(s.accessToken).expect(200);
     await sql.query('UPDATE users SET name = $2 WHERE id = $1', [s.user.id, 'Renamed Elsewhere']);
-    await eventually(() => me(s.accessToken), (r) => r.body?.user?.name === 'Renamed Elsewhere', { what: 'the new name to show', timeoutMs: 5000, intervalMs: 10 });
+    await eventually(
+      () => me(s.accessToken),
+      (r) => r.body?.user?.name === 'Renamed Elsewhere',
+      { what: 'the new name to show', timeoutMs: 5000, intervalMs: 10 },
+    );
     await sql.query('DELETE FROM users WHERE id = $1', [s.user.id]);
-    await eventually(() => me(s.accessToken), (r) => r.status === 401, { what: 'the deleted user to be refused', timeoutMs: 5000, intervalMs: 10 });
+    await eventually(
+      () => me(s.accessToken),
+      (r) => r.status === 401,
+      { what: 'the deleted user to be refused', timeoutMs: 5000, intervalMs: 10 },
+    );
   });
 
   it('refuses a session signed out through this server on the very next request', async () => {

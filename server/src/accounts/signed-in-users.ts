@@ -32,7 +32,10 @@ export class SignedInUsers {
   private closed = false;
   private relisten: NodeJS.Timeout | null = null;
 
-  constructor(private readonly databaseUrl: string, private readonly logger?: Logger) {}
+  constructor(
+    private readonly databaseUrl: string,
+    private readonly logger?: Logger,
+  ) {}
 
   /** The user of a live session, or null when it was revoked, is unknown or its user is gone. */
   async find(sessionId: string, userId: string): Promise<User | null> {
@@ -41,7 +44,8 @@ export class SignedInUsers {
     const before = this.changes;
     const rows = await User.sequelize!.query<User>(SIGNED_IN_USER, { replacements: { sessionId, userId }, model: User, mapToModel: true });
     const user = rows[0] ?? null;
-    if (user && this.listening && before === this.changes) this.remembered.set(sessionId, { userId, row: user.get({ plain: true }) as UserRow });
+    if (user && this.listening && before === this.changes)
+      this.remembered.set(sessionId, { userId, row: user.get({ plain: true }) as UserRow });
     return user;
   }
 
@@ -74,7 +78,10 @@ export class SignedInUsers {
       void client.end().catch(() => {});
       if (this.closed) return;
       if (err) this.logger?.warn({ err }, 'auth change listener lost; sign-ins are not remembered until it is back');
-      this.relisten = setTimeout(() => { this.relisten = null; void this.listen(); }, RELISTEN_MS);
+      this.relisten = setTimeout(() => {
+        this.relisten = null;
+        void this.listen();
+      }, RELISTEN_MS);
       this.relisten.unref();
     };
     client.on('error', lost);

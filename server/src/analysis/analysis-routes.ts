@@ -9,7 +9,9 @@ import { referencesByIds, taskReferences } from '../compute/task-references';
 import type { ReferenceIds, TaskReferences } from '../compute/compute-tasks';
 import { Membership } from '../models/init-models';
 
-const workspaceQuery = z.object({ workspace: idSchema.optional().describe('resolve materialId and meshId against this workspace (you must be a member)') });
+const workspaceQuery = z.object({
+  workspace: idSchema.optional().describe('resolve materialId and meshId against this workspace (you must be a member)'),
+});
 
 /** The caller must belong to a workspace named in `?workspace=` (404 otherwise, as for any workspace route). */
 async function assertMember(userId: string, workspaceId: string): Promise<void> {
@@ -25,7 +27,8 @@ async function referencesFor(userId: string, workspaceId: string | undefined, do
 
 /** The request body as text: `app.ts` reads `/analyze` bodies unparsed, for the worker thread to parse. */
 function bodyText(req: express.Request): string {
-  if (typeof req.body !== 'string') throw AppError.badRequest('Send the part document as JSON, with Content-Type: application/json.', 'body');
+  if (typeof req.body !== 'string')
+    throw AppError.badRequest('Send the part document as JSON, with Content-Type: application/json.', 'body');
   return req.body;
 }
 
@@ -37,8 +40,14 @@ export function analysisRoutes(ctx: AppContext): Router {
   const route = routeGroup(router, ctx.catalogue, '');
 
   route({
-    method: 'post', path: '/analyze', summary: 'The spin report of a part document; nothing is saved.',
-    access: { kind: 'user' }, body: partDocumentSchema, bodyValidatedBy: 'engine', query: workspaceQuery, errors: [404, 413, 422],
+    method: 'post',
+    path: '/analyze',
+    summary: 'The spin report of a part document; nothing is saved.',
+    access: { kind: 'user' },
+    body: partDocumentSchema,
+    bodyValidatedBy: 'engine',
+    query: workspaceQuery,
+    errors: [404, 413, 422],
     success: { status: 200, description: 'The spin report (SI units).', schema: reportSchema },
     // The body stays text until a worker thread parses, checks and analyses it and answers the
     // report as text: the event loop only passes strings (README, "Performance").
@@ -53,12 +62,24 @@ export function analysisRoutes(ctx: AppContext): Router {
   });
 
   route({
-    method: 'post', path: '/simulate', summary: 'Torque-free motion from the intended spin plus a misalignment: sampled ω, attitude quaternions, L, 2T, |L| and the polhode.',
-    access: { kind: 'user' }, body: simulateInputSchema, bodyValidatedBy: 'engine', query: workspaceQuery, errors: [404, 413, 422],
+    method: 'post',
+    path: '/simulate',
+    summary: 'Torque-free motion from the intended spin plus a misalignment: sampled ω, attitude quaternions, L, 2T, |L| and the polhode.',
+    access: { kind: 'user' },
+    body: simulateInputSchema,
+    bodyValidatedBy: 'engine',
+    query: workspaceQuery,
+    errors: [404, 413, 422],
     success: { status: 200, description: 'Samples of the motion.', schema: z.record(z.string(), z.unknown()) },
-    handler: async ({ body, query, auth }, _req, res) => ctx.compute.run<SimulationResult>({
-      kind: 'simulate', input: body, references: await referencesFor(auth!.user.id, query.workspace, (body as { part?: unknown } | null)?.part),
-    }, abortOnClose(res)),
+    handler: async ({ body, query, auth }, _req, res) =>
+      ctx.compute.run<SimulationResult>(
+        {
+          kind: 'simulate',
+          input: body,
+          references: await referencesFor(auth!.user.id, query.workspace, (body as { part?: unknown } | null)?.part),
+        },
+        abortOnClose(res),
+      ),
   });
 
   return router;
@@ -71,6 +92,8 @@ export function analysisRoutes(ctx: AppContext): Router {
  */
 function abortOnClose(res: express.Response): AbortSignal {
   const controller = new AbortController();
-  res.once('close', () => { if (!res.writableFinished) controller.abort(); });
+  res.once('close', () => {
+    if (!res.writableFinished) controller.abort();
+  });
   return controller.signal;
 }

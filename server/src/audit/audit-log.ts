@@ -13,8 +13,16 @@ export interface AuditEntry {
 
 /** Appends one audit event (inside the caller's transaction when given). */
 export async function recordAudit(entry: AuditEntry, transaction?: Transaction): Promise<void> {
-  await AuditEvent.create({
-    workspaceId: entry.workspaceId, actorId: entry.actorId, action: entry.action, targetType: entry.targetType,
-    targetId: entry.targetId ?? null, targetLabel: entry.targetLabel ?? null, details: entry.details ?? {},
-  }, { transaction });
+  await AuditEvent.create(
+    {
+      workspaceId: entry.workspaceId,
+      actorId: entry.actorId,
+      action: entry.action,
+      targetType: entry.targetType,
+      targetId: entry.targetId ?? null,
+      targetLabel: entry.targetLabel ?? null,
+      details: entry.details ?? {},
+    },
+    { transaction },
+  );
 }

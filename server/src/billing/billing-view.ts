@@ -11,13 +11,22 @@ export async function billingView(ctx: AppContext, workspace: Workspace): Promis
     plans,
     plan: plans.find((p) => p.id === workspace.planId) ?? null,
     seats: await seatUsage(workspace, ctx.config.billing.evaluationSeats),
-    subscription: workspace.subscriptionId ? {
-      status: (workspace.subscriptionStatus ?? 'active') as NonNullable<Billing['subscription']>['status'],
-      cancelAtPeriodEnd: workspace.cancelAtPeriodEnd,
-      currentPeriodEnd: workspace.currentPeriodEnd?.toISOString() ?? null,
-      trialEndsAt: workspace.trialEndsAt?.toISOString() ?? null,
-    } : null,
-    paymentMethod: workspace.cardLast4 ? { brand: workspace.cardBrand ?? 'card', last4: workspace.cardLast4, expMonth: workspace.cardExpMonth ?? null, expYear: workspace.cardExpYear ?? null } : null,
+    subscription: workspace.subscriptionId
+      ? {
+          status: (workspace.subscriptionStatus ?? 'active') as NonNullable<Billing['subscription']>['status'],
+          cancelAtPeriodEnd: workspace.cancelAtPeriodEnd,
+          currentPeriodEnd: workspace.currentPeriodEnd?.toISOString() ?? null,
+          trialEndsAt: workspace.trialEndsAt?.toISOString() ?? null,
+        }
+      : null,
+    paymentMethod: workspace.cardLast4
+      ? {
+          brand: workspace.cardBrand ?? 'card',
+          last4: workspace.cardLast4,
+          expMonth: workspace.cardExpMonth ?? null,
+          expYear: workspace.cardExpYear ?? null,
+        }
+      : null,
     workspaceState: workspace.effectiveState(),
     pastDueSince: workspace.pastDueSince?.toISOString() ?? null,
     readOnlyFrom: workspace.readOnlyFrom()?.toISOString() ?? null,

@@ -3,9 +3,20 @@ import type { Invoice, Plan } from '@tumblewise/shared';
 import type { Config } from '../config/config';
 import { AppError } from '../http/app-error';
 
-export interface CardSummary { brand: string; last4: string; expMonth: number | null; expYear: number | null }
+export interface CardSummary {
+  brand: string;
+  last4: string;
+  expMonth: number | null;
+  expYear: number | null;
+}
 export interface SubscriptionSummary {
-  subscriptionId: string; itemId: string; status: string; currentPeriodEnd: Date | null; trialEndsAt: Date | null; cancelAtPeriodEnd: boolean; quantity: number;
+  subscriptionId: string;
+  itemId: string;
+  status: string;
+  currentPeriodEnd: Date | null;
+  trialEndsAt: Date | null;
+  cancelAtPeriodEnd: boolean;
+  quantity: number;
 }
 
 /**
@@ -45,7 +56,13 @@ export class PaymentProvider {
       } catch (err) {
         if ((err as { statusCode?: number }).statusCode !== 404) throw err;
         const product = await this.client.products.create({ name: `Tumblewise ${plan.name}` });
-        await this.client.plans.create({ id, product: product.id, amount: plan.pricePerSeatMonthly, currency: plan.currency, interval: 'month' });
+        await this.client.plans.create({
+          id,
+          product: product.id,
+          amount: plan.pricePerSeatMonthly,
+          currency: plan.currency,
+          interval: 'month',
+        });
       }
       return id;
     });
@@ -54,7 +71,11 @@ export class PaymentProvider {
   /** A customer for the workspace with the tokenised card as its default source (402 when declined). */
   async createCustomer(workspace: { id: string; name: string }, cardToken: string): Promise<{ customerId: string; card: CardSummary }> {
     return this.call(async () => {
-      const customer = await this.client.customers.create({ name: workspace.name, source: cardToken, metadata: { workspaceId: workspace.id } });
+      const customer = await this.client.customers.create({
+        name: workspace.name,
+        source: cardToken,
+        metadata: { workspaceId: workspace.id },
+      });
       return { customerId: customer.id, card: await this.defaultCard(customer.id, customer.default_source as string | null) };
     });
   }
@@ -68,10 +89,24 @@ export class PaymentProvider {
     });
   }
 
-  async createSubscription(customerId: string, planId: string, seats: number, trialDays: number, workspaceId: string): Promise<SubscriptionSummary> {
-    return this.call(async () => summary(await this.client.subscriptions.create({
-      customer: customerId, items: [{ plan: planId, quantity: seats }], trial_period_days: trialDays || undefined, metadata: { workspaceId },
-    } as Stripe.SubscriptionCreateParams), trialDays));
+  async createSubscription(
+    customerId: string,
+    planId: string,
+    seats: number,
+    trialDays: number,
+    workspaceId: string,
+  ): Promise<SubscriptionSummary> {
+    return this.call(async () =>
+      summary(
+        await this.client.subscriptions.create({
+          customer: customerId,
+          items: [{ plan: planId, quantity: seats }],
+          trial_period_days: trialDays || undefined,
+          metadata: { workspaceId },
+        } as Stripe.SubscriptionCreateParams),
+        trialDays,
+      ),
+    );
   }
 
   /** Changes the seat count on the subscription item; the provider prorates the difference. */
@@ -87,8 +122,15 @@ export class PaymentProvider {
     return this.call(async () => {
       const list = await this.client.invoices.list({ customer: customerId, limit: 100 });
       return list.data.map((i) => ({
-        id: i.id ?? '', number: i.number ?? null, createdAt: new Date(i.created * 1000).toISOString(), amountDue: i.amount_due, amountPaid: i.amount_paid,
-        currency: i.currency, status: (i.status ?? 'draft') as Invoice['status'], description: i.description ?? 'Subscription', documentUrl: i.hosted_invoice_url ?? i.invoice_pdf ?? null,
+        id: i.id ?? '',
+        number: i.number ?? null,
+        createdAt: new Date(i.created * 1000).toISOString(),
+        amountDue: i.amount_due,
+        amountPaid: i.amount_paid,
+        currency: i.currency,
+        status: (i.status ?? 'draft') as Invoice['status'],
+        description: i.description ?? 'Subscription',
+        documentUrl: i.hosted_invoice_url ?? i.invoice_pdf ?? null,
       }));
     });
   }
@@ -105,11 +147,28 @@ export class PaymentProvider {
       return await fn();
     } catch (err) {
       const e = err as { type?: string; statusCode?: number; message?: string; code?: string };
-      if (e.type === 'StripeCardError') throw new AppError(402, 'card_declined', `${e.message ?? 'The card was declined.'} Nothing was changed; try another card.`, 'cardToken');
+      if (e.type === 'StripeCardError')
+        throw new AppError(
+          402,
+          'card_declined',
+          `${e.message ?? 'The card was declined.'} Nothing was changed; try another card.`,
+          'cardToken',
+        );
       if (e.type === 'StripeConnectionError' || e.code === 'ECONNREFUSED') {
-        throw new AppError(503, 'payment_unavailable', 'The payment provider is not reachable right now. Nothing was changed; try again in a moment.', undefined, { 'Retry-After': '10' });
+        throw new AppError(
+          503,
+          'payment_unavailable',
+          'The payment provider is not reachable right now. Nothing was changed; try again in a moment.',
+          undefined,
+          { 'Retry-After': '10' },
+        );
       }
-      if (e.statusCode === 404) throw new AppError(409, 'payment_record_missing', 'The payment provider does not know this workspace’s subscription (the local fake forgets on restart). Start the subscription again.');
+      if (e.statusCode === 404)
+        throw new AppError(
+          409,
+          'payment_record_missing',
+          'The payment provider does not know this workspace’s subscription (the local fake forgets on restart). Start the subscription again.',
+        );
       throw err;
     }
   }
@@ -117,12 +176,23 @@ export class PaymentProvider {
 
 function summary(sub: Stripe.Subscription, requestedTrialDays: number): SubscriptionSummary {
   const item = sub.items.data[0];
-  const periodEnd = (sub as unknown as { current_period_end?: number }).current_period_end ?? (item as unknown as { current_period_end?: number })?.current_period_end;
+  const periodEnd =
+    (sub as unknown as { current_period_end?: number }).current_period_end ??
+    (item as unknown as { current_period_end?: number })?.current_period_end;
   // The local fake ignores trials; a trial we asked for is recorded as such.
-  const trialEnd = sub.trial_end ? new Date(sub.trial_end * 1000) : requestedTrialDays ? new Date(Date.now() + requestedTrialDays * 86400_000) : null;
+  const trialEnd = sub.trial_end
+    ? new Date(sub.trial_end * 1000)
+    : requestedTrialDays
+      ? new Date(Date.now() + requestedTrialDays * 86400_000)
+      : null;
   const status = sub.status === 'active' && requestedTrialDays && !sub.trial_end ? 'trialing' : sub.status;
   return {
-    subscriptionId: sub.id, itemId: item.id, status, currentPeriodEnd: periodEnd ? new Date(periodEnd * 1000) : null, trialEndsAt: trialEnd,
-    cancelAtPeriodEnd: sub.cancel_at_period_end, quantity: item.quantity ?? 0,
+    subscriptionId: sub.id,
+    itemId: item.id,
+    status,
+    currentPeriodEnd: periodEnd ? new Date(periodEnd * 1000) : null,
+    trialEndsAt: trialEnd,
+    cancelAtPeriodEnd: sub.cancel_at_period_end,
+    quantity: item.quantity ?? 0,
   };
 }

@@ -13,12 +13,15 @@ let t: TestApp;
 let server: Server;
 beforeAll(async () => {
   const port = await freePort();
-  const endpoint = await fetch(`${process.env.PAYMENT_API_URL}/v1/webhook_endpoints`, {
-    method: 'POST', headers: { authorization: 'Bearer sk_test_events', 'content-type': 'application/x-www-form-urlencoded' },
+  const endpoint = (await fetch(`${process.env.PAYMENT_API_URL}/v1/webhook_endpoints`, {
+    method: 'POST',
+    headers: { authorization: 'Bearer sk_test_events', 'content-type': 'application/x-www-form-urlencoded' },
     body: new URLSearchParams({ url: `http://127.0.0.1:${port}/api/v1/billing/webhook`, 'enabled_events[]': '*' }),
-  }).then((r) => r.json()) as { secret: string };
+  }).then((r) => r.json())) as { secret: string };
   t = await startTestApp({ PAYMENT_WEBHOOK_SECRET: endpoint.secret });
-  server = await new Promise((resolve) => { const s = t.app.listen(port, '127.0.0.1', () => resolve(s)); });
+  server = await new Promise((resolve) => {
+    const s = t.app.listen(port, '127.0.0.1', () => resolve(s));
+  });
 });
 afterAll(async () => {
   await new Promise((r) => server.close(r));
@@ -31,13 +34,20 @@ const until = (check: () => Promise<boolean>) => eventually(check, (ok) => ok, {
 it('turns past due on a failed renewal and back on a paid one', async () => {
   const owner = await signUp(t.app);
   const base = `/api/v1/workspaces/${owner.workspace.id}`;
-  await request(t.app).post(`${base}/billing/subscription`).set(bearer(owner.accessToken)).send({ seats: 2, cardToken: 'tok_visa' }).expect(200);
+  await request(t.app)
+    .post(`${base}/billing/subscription`)
+    .set(bearer(owner.accessToken))
+    .send({ seats: 2, cardToken: 'tok_visa' })
+    .expect(200);
   const w = (await Workspace.findByPk(owner.workspace.id))!;
   // The subscription's own events (created, the trial invoice paid) arrive first.
   await until(async () => (await Workspace.findByPk(w.id))!.billingEventAt !== null);
-  const renew = (outcome: string) => fetch(`${process.env.PAYMENT_API_URL}/v1/test_helpers/subscriptions/${w.subscriptionId}/renew`, {
-    method: 'POST', headers: { authorization: 'Bearer sk_test_events', 'content-type': 'application/x-www-form-urlencoded' }, body: new URLSearchParams({ outcome }),
-  });
+  const renew = (outcome: string) =>
+    fetch(`${process.env.PAYMENT_API_URL}/v1/test_helpers/subscriptions/${w.subscriptionId}/renew`, {
+      method: 'POST',
+      headers: { authorization: 'Bearer sk_test_events', 'content-type': 'application/x-www-form-urlencoded' },
+      body: new URLSearchParams({ outcome }),
+    });
   expect((await renew('failed')).status).toBe(200);
   await until(async () => (await Workspace.findByPk(w.id))!.state === 'past_due');
   expect((await renew('paid')).status).toBe(200);

@@ -10,7 +10,7 @@ export async function seatUsage(workspace: Workspace, evaluationSeats: number, t
     Invitation.count({ where: { workspaceId: workspace.id, status: 'pending', expiresAt: { [Op.gt]: new Date() } }, transaction }),
   ]);
   const evaluationAllowance = !workspace.subscriptionId;
-  const bought = evaluationAllowance ? evaluationSeats : workspace.seats ?? 0;
+  const bought = evaluationAllowance ? evaluationSeats : (workspace.seats ?? 0);
   return { bought, members, pendingInvitations, available: Math.max(0, bought - members - pendingInvitations), evaluationAllowance };
 }
 
@@ -18,12 +18,20 @@ export async function seatUsage(workspace: Workspace, evaluationSeats: number, t
  * Refuses (409 seat_limit) when `adding` more seat holders would exceed the seats. `counted`
  * leaves out a pending invitation that is being turned into a member.
  */
-export async function assertSeatsFor(workspace: Workspace, evaluationSeats: number, adding: number, options: { acceptingPending?: boolean; transaction?: Transaction } = {}): Promise<void> {
+export async function assertSeatsFor(
+  workspace: Workspace,
+  evaluationSeats: number,
+  adding: number,
+  options: { acceptingPending?: boolean; transaction?: Transaction } = {},
+): Promise<void> {
   const usage = await seatUsage(workspace, evaluationSeats, options.transaction);
   const held = usage.members + usage.pendingInvitations - (options.acceptingPending ? 1 : 0);
   if (held + adding > usage.bought) {
     const what = usage.evaluationAllowance ? `the ${usage.bought} seats of the evaluation allowance` : `its ${usage.bought} seats`;
     const count = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
-    throw AppError.conflict('seat_limit', `This workspace has used ${what} (${count(usage.members, 'member', 'members')}, ${count(usage.pendingInvitations, 'pending invitation', 'pending invitations')}). An owner can buy more seats under Subscription in the admin app, or revoke a pending invitation.`);
+    throw AppError.conflict(
+      'seat_limit',
+      `This workspace has used ${what} (${count(usage.members, 'member', 'members')}, ${count(usage.pendingInvitations, 'pending invitation', 'pending invitations')}). An owner can buy more seats under Subscription in the admin app, or revoke a pending invitation.`,
+    );
   }
 }

@@ -15,7 +15,9 @@ describe('which tasks run on the event loop', () => {
 
   it('sends larger parts, meshes, simulations and unreadable documents to a worker', () => {
     expect(isSmallAnalysis({ kind: 'analyze', part: part(Array(EVENT_LOOP_ANALYSIS_PRIMITIVES + 1).fill(box)) })).toBe(false);
-    expect(isSmallAnalysis({ kind: 'analyze', part: part([box, { shape: 'mesh', vertices: [], triangles: [], density: 1000 }]) })).toBe(false);
+    expect(isSmallAnalysis({ kind: 'analyze', part: part([box, { shape: 'mesh', vertices: [], triangles: [], density: 1000 }]) })).toBe(
+      false,
+    );
     expect(isSmallAnalysis({ kind: 'analyze', part: part([box]), references: { meshes: { m1: new Uint8Array(84) } } })).toBe(false);
     expect(isSmallAnalysis({ kind: 'simulate', input: { part: part([box]) } })).toBe(false);
     expect(isSmallAnalysis({ kind: 'analyze', part: null })).toBe(false);
@@ -35,7 +37,13 @@ describe('the compute pool', () => {
 
   it('asks for the stored materials and meshes a document names, once, and analyses with them', async () => {
     const lead = '00000000-0000-4000-8000-00000000000a';
-    const doc = { primitives: [{ id: 'ball', shape: 'sphere', radius: 0.05, materialId: lead }, { id: 'cap', shape: 'sphere', radius: 0.01, position: [0, 0, 0.06], materialId: lead }], spin: { axis: [0, 0, 1], rate: 5 } };
+    const doc = {
+      primitives: [
+        { id: 'ball', shape: 'sphere', radius: 0.05, materialId: lead },
+        { id: 'cap', shape: 'sphere', radius: 0.01, position: [0, 0, 0.06], materialId: lead },
+      ],
+      spin: { axis: [0, 0, 1], rate: 5 },
+    };
     const load = jest.fn(async () => ({ materials: { [lead]: { density: 11340 } } }));
     const report = JSON.parse(await pool.analyzeJson(JSON.stringify(doc), load));
     expect(load).toHaveBeenCalledTimes(1);
@@ -52,12 +60,21 @@ describe('the compute pool', () => {
     const bad = structuredClone(racket) as { primitives: { radius?: number }[] };
     const first = bad.primitives.findIndex((p) => p.radius !== undefined);
     bad.primitives[first].radius = -1;
-    await expect(pool.analyzeJson(JSON.stringify(bad), undefined)).rejects.toMatchObject({ status: 400, field: `primitives[${first}].radius` });
+    await expect(pool.analyzeJson(JSON.stringify(bad), undefined)).rejects.toMatchObject({
+      status: 400,
+      field: `primitives[${first}].radius`,
+    });
   });
 
   it('keeps the analyses queued behind a cancelled simulation: cancelling ends only that thread', async () => {
     const controller = new AbortController();
-    const long = pool.run({ kind: 'simulate', input: { moments: [6.5, 5, 2.5], axis: 'intermediate', rate: 400, misalignmentDeg: 1, seconds: 600, sampleRate: 1 } }, controller.signal);
+    const long = pool.run(
+      {
+        kind: 'simulate',
+        input: { moments: [6.5, 5, 2.5], axis: 'intermediate', rate: 400, misalignmentDeg: 1, seconds: 600, sampleRate: 1 },
+      },
+      controller.signal,
+    );
     const analyses = Array.from({ length: 12 }, () => pool.analyzeJson(racketJson, undefined));
     await new Promise((r) => setTimeout(r, 50));
     controller.abort();
@@ -74,10 +91,22 @@ describe('a pool of one thread', () => {
 
   it('still runs a short simulation while a long one holds a thread (MIN_INTERRUPTIBLE_THREADS)', async () => {
     const controller = new AbortController();
-    const long = pool.run({ kind: 'simulate', input: { moments: [6.5, 5, 2.5], axis: 'intermediate', rate: 1500, misalignmentDeg: 1, seconds: 600, sampleRate: 1 } }, controller.signal);
+    const long = pool.run(
+      {
+        kind: 'simulate',
+        input: { moments: [6.5, 5, 2.5], axis: 'intermediate', rate: 1500, misalignmentDeg: 1, seconds: 600, sampleRate: 1 },
+      },
+      controller.signal,
+    );
     let longSettled = false;
-    long.then(() => (longSettled = true), () => (longSettled = true));
-    const short = await pool.run<object>({ kind: 'simulate', input: { moments: [6.5, 5, 2.5], axis: 'major', rate: 10, misalignmentDeg: 1, seconds: 1, sampleRate: 50 } });
+    long.then(
+      () => (longSettled = true),
+      () => (longSettled = true),
+    );
+    const short = await pool.run<object>({
+      kind: 'simulate',
+      input: { moments: [6.5, 5, 2.5], axis: 'major', rate: 10, misalignmentDeg: 1, seconds: 1, sampleRate: 50 },
+    });
     expect(short).toBeTruthy();
     expect(longSettled).toBe(false); // answered while the long one was still running
     controller.abort();
@@ -87,9 +116,12 @@ describe('a pool of one thread', () => {
 
 describe('the compute threads’ code', () => {
   it('loads no mathjs (a small heap keeps the schema checks fast)', () => {
-    const script = "require('tsx/cjs/api').register(); require('./server/src/compute/compute-tasks.ts');"
-      + " console.log(JSON.stringify(Object.keys(require.cache).filter((k) => k.includes('node_modules'))));";
-    const loaded = JSON.parse(execFileSync(process.execPath, ['-e', script], { cwd: path.resolve(__dirname, '../../..'), encoding: 'utf8' })) as string[];
+    const script =
+      "require('tsx/cjs/api').register(); require('./server/src/compute/compute-tasks.ts');" +
+      " console.log(JSON.stringify(Object.keys(require.cache).filter((k) => k.includes('node_modules'))));";
+    const loaded = JSON.parse(
+      execFileSync(process.execPath, ['-e', script], { cwd: path.resolve(__dirname, '../../..'), encoding: 'utf8' }),
+    ) as string[];
     expect(loaded.some((k) => k.includes('/zod/'))).toBe(true); // the check sees what the engine loads
     expect(loaded.filter((k) => k.includes('/mathjs/'))).toEqual([]);
   });

@@ -17,8 +17,11 @@ export const EVENT_LOOP_ANALYSIS_PRIMITIVES = 64;
 export function isSmallAnalysis(task: ComputeTask): boolean {
   if (task.kind !== 'analyze' || Object.keys(task.references?.meshes ?? {}).length > 0) return false;
   const primitives = (task.part as { primitives?: unknown } | null)?.primitives;
-  return Array.isArray(primitives) && primitives.length <= EVENT_LOOP_ANALYSIS_PRIMITIVES
-    && primitives.every((p) => (p as { shape?: unknown } | null)?.shape !== 'mesh');
+  return (
+    Array.isArray(primitives) &&
+    primitives.length <= EVENT_LOOP_ANALYSIS_PRIMITIVES &&
+    primitives.every((p) => (p as { shape?: unknown } | null)?.shape !== 'mesh')
+  );
 }
 
 /**
@@ -83,7 +86,11 @@ export class ComputePool {
    * A document that names stored materials or meshes is sent back for `loadReferences` to look
    * them up, then analysed with them; without `loadReferences` there are none to find.
    */
-  async analyzeJson(json: string, loadReferences: ((ids: ReferenceIds) => Promise<TaskReferences>) | undefined, signal?: AbortSignal): Promise<string> {
+  async analyzeJson(
+    json: string,
+    loadReferences: ((ids: ReferenceIds) => Promise<TaskReferences>) | undefined,
+    signal?: AbortSignal,
+  ): Promise<string> {
     let outcome = await this.outcome({ kind: 'analyze-json', json, askForReferences: loadReferences !== undefined }, signal);
     if (!outcome.ok && outcome.kind === 'needs-references' && loadReferences) {
       outcome = await this.outcome({ kind: 'analyze-json', json, references: await loadReferences(outcome.ids) }, signal);
@@ -96,16 +103,20 @@ export class ComputePool {
     try {
       const transferList = task.kind === 'scatter' && task.progress ? [task.progress] : undefined;
       if (!interruptible(task) && signal?.aborted) throw Object.assign(new Error('The client went away.'), { name: 'AbortError' });
-      const outcome = isSmallAnalysis(task) ? await runComputeTask(task)
-        : interruptible(task) ? await this.interruptibles.run(task, { signal, transferList: transferList as never })
-        : await this.analyses.run(task);
+      const outcome = isSmallAnalysis(task)
+        ? await runComputeTask(task)
+        : interruptible(task)
+          ? await this.interruptibles.run(task, { signal, transferList: transferList as never })
+          : await this.analyses.run(task);
       if (!interruptible(task) && signal?.aborted) throw Object.assign(new Error('The client went away.'), { name: 'AbortError' });
       return outcome;
     } catch (err) {
       // The client went away (or a study was cancelled): not a server fault, nothing to log.
       if ((err as Error)?.name === 'AbortError') throw new AppError(499, 'cancelled', 'The request was cancelled before it finished.');
       if ((err as Error)?.message?.includes('Task queue is at limit')) {
-        throw new AppError(503, 'busy', 'The server is busy with other computations. Try again in a moment.', undefined, { 'Retry-After': '5' });
+        throw new AppError(503, 'busy', 'The server is busy with other computations. Try again in a moment.', undefined, {
+          'Retry-After': '5',
+        });
       }
       throw err;
     }
@@ -121,7 +132,8 @@ function answer<T>(outcome: ComputeOutcome): T {
   if (outcome.ok) return outcome.value as T;
   if (outcome.kind === 'needs-references') throw new Error('a task that needs references was not given them');
   const first = outcome.issues[0];
-  if (outcome.kind === 'invalid-json') throw AppError.badRequest(first?.message ?? 'The request body is not valid JSON.', undefined, 'invalid_json');
+  if (outcome.kind === 'invalid-json')
+    throw AppError.badRequest(first?.message ?? 'The request body is not valid JSON.', undefined, 'invalid_json');
   const message = first ? `${first.path ? `${first.path} ` : ''}${first.message}` : 'The part cannot be analysed.';
   if (outcome.kind === 'invalid') throw AppError.badRequest(capitalise(message), first?.path || undefined);
   throw new AppError(422, 'unanalysable', capitalise(message), first?.path || undefined);

@@ -1,7 +1,18 @@
 import type { MessagePort } from 'node:worker_threads';
 import {
-  analyzePart, analyzeValidatedPart, EngineInputError, meshMassProperties, parseStl, runScatterStudy, simulate, validatePartDocument,
-  type InputIssue, type MeshProblem, type PartResolvers, type ResolvedMaterial, type ResolvedMesh,
+  analyzePart,
+  analyzeValidatedPart,
+  EngineInputError,
+  meshMassProperties,
+  parseStl,
+  runScatterStudy,
+  simulate,
+  validatePartDocument,
+  type InputIssue,
+  type MeshProblem,
+  type PartResolvers,
+  type ResolvedMaterial,
+  type ResolvedMesh,
 } from '@tumblewise/engine/worker';
 import { partDrawing } from '../exports/part-outline';
 import { firstSelfIntersection, selfIntersectionProblem } from '../meshes/self-intersection';
@@ -88,7 +99,8 @@ async function checkMesh(bytes: Uint8Array, maxTriangles: number): Promise<MeshC
 
 /** The stored materials and meshes a checked document names (each id once). */
 function referenceIdsOf(doc: { primitives: { materialId?: string; meshId?: string }[] }): ReferenceIds {
-  const materialIds = new Set<string>(), meshIds = new Set<string>();
+  const materialIds = new Set<string>(),
+    meshIds = new Set<string>();
   for (const p of doc.primitives) {
     if (p.materialId !== undefined) materialIds.add(p.materialId);
     if (p.meshId !== undefined) meshIds.add(p.meshId);
@@ -116,26 +128,37 @@ function analyzeJson(task: Extract<ComputeTask, { kind: 'analyze-json' }>): Comp
 export function runComputeTask(task: ComputeTask): ComputeOutcome | Promise<ComputeOutcome> {
   try {
     switch (task.kind) {
-      case 'analyze': return { ok: true, value: analyzePart(task.part, resolvers(task.references)) };
-      case 'analyze-json': return analyzeJson(task);
-      case 'simulate': return { ok: true, value: simulate(task.input, resolvers(task.references)) };
-      case 'check-mesh': return checkMesh(task.bytes, task.maxTriangles).then((value) => ({ ok: true, value }));
+      case 'analyze':
+        return { ok: true, value: analyzePart(task.part, resolvers(task.references)) };
+      case 'analyze-json':
+        return analyzeJson(task);
+      case 'simulate':
+        return { ok: true, value: simulate(task.input, resolvers(task.references)) };
+      case 'check-mesh':
+        return checkMesh(task.bytes, task.maxTriangles).then((value) => ({ ok: true, value }));
       case 'part-drawing': {
         const meshes = resolvers(task.references);
-        const corners = (id: string) => { const m = meshes.resolveMesh?.(id); return m && m.corners.subarray(0, 9 * m.triangleCount); };
+        const corners = (id: string) => {
+          const m = meshes.resolveMesh?.(id);
+          return m && m.corners.subarray(0, 9 * m.triangleCount);
+        };
         return { ok: true, value: partDrawing(task.document, corners) };
       }
       case 'scatter': {
         let last = 0;
-        const value = runScatterStudy(task.input, (done, total) => {
-          // Every 200 ms, and at each twentieth of the samples (a short study still shows its progress).
-          const now = Date.now();
-          const step = Math.max(1, Math.floor(total / 20));
-          if (task.progress && (now - last > 200 || done === total || done % step === 0)) {
-            last = now;
-            task.progress.postMessage({ done, total });
-          }
-        }, resolvers(task.references));
+        const value = runScatterStudy(
+          task.input,
+          (done, total) => {
+            // Every 200 ms, and at each twentieth of the samples (a short study still shows its progress).
+            const now = Date.now();
+            const step = Math.max(1, Math.floor(total / 20));
+            if (task.progress && (now - last > 200 || done === total || done % step === 0)) {
+              last = now;
+              task.progress.postMessage({ done, total });
+            }
+          },
+          resolvers(task.references),
+        );
         task.progress?.close();
         return { ok: true, value };
       }

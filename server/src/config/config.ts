@@ -77,7 +77,14 @@ export function loadConfig(env: Env = process.env): Config {
     dataDir,
     databaseUrl: env.DATABASE_URL ?? `postgres://tumblewise@127.0.0.1:${int(env, 'TUMBLEWISE_PG_PORT', 54329)}/tumblewise`,
     appDistDir: path.resolve(env.APP_DIST_DIR ?? path.join(root, 'dist')),
-    trustProxy: trustProxyRaw === undefined ? false : /^\d+$/.test(trustProxyRaw) ? Number(trustProxyRaw) : trustProxyRaw === 'true' ? true : trustProxyRaw,
+    trustProxy:
+      trustProxyRaw === undefined
+        ? false
+        : /^\d+$/.test(trustProxyRaw)
+          ? Number(trustProxyRaw)
+          : trustProxyRaw === 'true'
+            ? true
+            : trustProxyRaw,
     logLevel: env.LOG_LEVEL ?? (nodeEnv === 'test' ? 'silent' : 'info'),
     mail: {
       host: env.SMTP_HOST ?? '127.0.0.1',
@@ -88,7 +95,9 @@ export function loadConfig(env: Env = process.env): Config {
     payment: {
       apiUrl: env.PAYMENT_API_URL ?? 'http://127.0.0.1:4390',
       secretKey: env.PAYMENT_SECRET_KEY ?? storedSecret(dataDir, 'paymentSecretKey', () => `sk_test_${Date.now().toString(36)}local`),
-      webhookSecret: env.PAYMENT_WEBHOOK_SECRET ?? storedSecret(dataDir, 'paymentWebhookSecret', () => `whsec_${Math.random().toString(36).slice(2)}${Date.now().toString(36)}`),
+      webhookSecret:
+        env.PAYMENT_WEBHOOK_SECRET ??
+        storedSecret(dataDir, 'paymentWebhookSecret', () => `whsec_${Math.random().toString(36).slice(2)}${Date.now().toString(36)}`),
     },
     billing: {
       graceDays: int(env, 'BILLING_GRACE_DAYS', 7, 0),

@@ -22,7 +22,9 @@ function sphere(n: number): Vec[] {
   const pts: Vec[] = [];
   const golden = Math.PI * (3 - Math.sqrt(5));
   for (let i = 0; i < n; i++) {
-    const z = 1 - (2 * (i + 0.5)) / n, r = Math.sqrt(1 - z * z), a = i * golden;
+    const z = 1 - (2 * (i + 0.5)) / n,
+      r = Math.sqrt(1 - z * z),
+      a = i * golden;
     pts.push([r * Math.cos(a), r * Math.sin(a), z]);
   }
   return pts;
@@ -41,28 +43,66 @@ export type MeshCorners = (meshId: string) => ArrayLike<number> | undefined;
 /** Surface samples in the primitive's local frame (PRODUCT.md frames: symmetry axis local z). */
 function localSamples(p: Prim, meshCorners: MeshCorners): Vec[] {
   switch (p.shape) {
-    case 'box': { const [a, b, c] = vec(p.size); const pts: Vec[] = []; for (const x of [-a / 2, a / 2]) for (const y of [-b / 2, b / 2]) for (const z of [-c / 2, c / 2]) pts.push([x, y, z]); return pts; }
-    case 'cylinder': { const r = num(p.radius), h = num(p.length); return [...ring(r, -h / 2), ...ring(r, h / 2)]; }
-    case 'cone': { const r = num(p.radius), h = num(p.length), t = num(p.topRadius); return [...ring(r, 0), ...(t > 0 ? ring(t, h) : [[0, 0, h] as Vec])]; }
-    case 'sphere': { const r = num(p.radius); return sphere(120).map(([x, y, z]) => [r * x, r * y, r * z]); }
-    case 'ellipsoid': { const [a, b, c] = vec(p.semiAxes); return sphere(160).map(([x, y, z]) => [a * x, b * y, c * z]); }
-    case 'torus': {
-      const R = num(p.majorRadius), a = num(p.minorRadius); const pts: Vec[] = [];
-      for (let i = 0; i < 36; i++) for (let j = 0; j < 12; j++) {
-        const u = (2 * Math.PI * i) / 36, v = (2 * Math.PI * j) / 12;
-        pts.push([(R + a * Math.cos(v)) * Math.cos(u), (R + a * Math.cos(v)) * Math.sin(u), a * Math.sin(v)]);
-      }
+    case 'box': {
+      const [a, b, c] = vec(p.size);
+      const pts: Vec[] = [];
+      for (const x of [-a / 2, a / 2]) for (const y of [-b / 2, b / 2]) for (const z of [-c / 2, c / 2]) pts.push([x, y, z]);
       return pts;
     }
-    case 'capsule': { const r = num(p.radius), h = num(p.length); return sphere(120).map(([x, y, z]) => [r * x, r * y, r * z + (z >= 0 ? h / 2 : -h / 2)]); }
-    case 'point': return [[0, 0, 0]];
+    case 'cylinder': {
+      const r = num(p.radius),
+        h = num(p.length);
+      return [...ring(r, -h / 2), ...ring(r, h / 2)];
+    }
+    case 'cone': {
+      const r = num(p.radius),
+        h = num(p.length),
+        t = num(p.topRadius);
+      return [...ring(r, 0), ...(t > 0 ? ring(t, h) : [[0, 0, h] as Vec])];
+    }
+    case 'sphere': {
+      const r = num(p.radius);
+      return sphere(120).map(([x, y, z]) => [r * x, r * y, r * z]);
+    }
+    case 'ellipsoid': {
+      const [a, b, c] = vec(p.semiAxes);
+      return sphere(160).map(([x, y, z]) => [a * x, b * y, c * z]);
+    }
+    case 'torus': {
+      const R = num(p.majorRadius),
+        a = num(p.minorRadius);
+      const pts: Vec[] = [];
+      for (let i = 0; i < 36; i++)
+        for (let j = 0; j < 12; j++) {
+          const u = (2 * Math.PI * i) / 36,
+            v = (2 * Math.PI * j) / 12;
+          pts.push([(R + a * Math.cos(v)) * Math.cos(u), (R + a * Math.cos(v)) * Math.sin(u), a * Math.sin(v)]);
+        }
+      return pts;
+    }
+    case 'capsule': {
+      const r = num(p.radius),
+        h = num(p.length);
+      return sphere(120).map(([x, y, z]) => [r * x, r * y, r * z + (z >= 0 ? h / 2 : -h / 2)]);
+    }
+    case 'point':
+      return [[0, 0, 0]];
     case 'mesh': {
       const scale = num(p.scale, 1);
-      if (typeof p.meshId === 'string') { const corners = meshCorners(p.meshId); return corners ? cornerSamples(corners, scale) : []; }
+      if (typeof p.meshId === 'string') {
+        const corners = meshCorners(p.meshId);
+        return corners ? cornerSamples(corners, scale) : [];
+      }
       const v = p.vertices;
-      return Array.isArray(v) ? v.slice(0, 5000).map((c) => vec(c)).map(([x, y, z]) => [x * scale, y * scale, z * scale]) : [];
+      return Array.isArray(v)
+        ? v
+            .slice(0, 5000)
+            .map((c) => vec(c))
+            .map(([x, y, z]) => [x * scale, y * scale, z * scale])
+        : [];
     }
-    default: return [];
+    default:
+      return [];
   }
 }
 
@@ -75,11 +115,13 @@ export const MAX_PIECEWISE_TRIANGLES = 20_000;
  */
 function localPieces(p: Prim, meshCorners: MeshCorners): Vec[][] | null {
   if (p.shape === 'torus') {
-    const R = num(p.majorRadius), a = num(p.minorRadius);
-    const tube = (u: number) => Array.from({ length: 12 }, (_, j) => {
-      const v = (2 * Math.PI * j) / 12;
-      return [(R + a * Math.cos(v)) * Math.cos(u), (R + a * Math.cos(v)) * Math.sin(u), a * Math.sin(v)] as Vec;
-    });
+    const R = num(p.majorRadius),
+      a = num(p.minorRadius);
+    const tube = (u: number) =>
+      Array.from({ length: 12 }, (_, j) => {
+        const v = (2 * Math.PI * j) / 12;
+        return [(R + a * Math.cos(v)) * Math.cos(u), (R + a * Math.cos(v)) * Math.sin(u), a * Math.sin(v)] as Vec;
+      });
     return Array.from({ length: 36 }, (_, i) => [...tube((2 * Math.PI * i) / 36), ...tube((2 * Math.PI * (i + 1)) / 36)]);
   }
   if (p.shape !== 'mesh') return null;
@@ -90,9 +132,13 @@ function localPieces(p: Prim, meshCorners: MeshCorners): Vec[][] | null {
     const at = (k: number): Vec => [corners[k] * scale, corners[k + 1] * scale, corners[k + 2] * scale];
     return Array.from({ length: Math.floor(corners.length / 9) }, (_, t) => [at(9 * t), at(9 * t + 3), at(9 * t + 6)]);
   }
-  const vertices = Array.isArray(p.vertices) ? p.vertices : [], triangles = Array.isArray(p.triangles) ? p.triangles : [];
+  const vertices = Array.isArray(p.vertices) ? p.vertices : [],
+    triangles = Array.isArray(p.triangles) ? p.triangles : [];
   if (triangles.length === 0 || triangles.length > MAX_PIECEWISE_TRIANGLES) return null;
-  const at = (i: unknown): Vec => { const [x, y, z] = vec(vertices[num(i, -1)]); return [x * scale, y * scale, z * scale]; };
+  const at = (i: unknown): Vec => {
+    const [x, y, z] = vec(vertices[num(i, -1)]);
+    return [x * scale, y * scale, z * scale];
+  };
   return triangles.map((t) => (Array.isArray(t) && t.length === 3 ? [at(t[0]), at(t[1]), at(t[2])] : []));
 }
 
@@ -106,7 +152,7 @@ function counterClockwise(polygon: [number, number][]): [number, number][] {
 
 /** The convex hull of points in the plane (d3-polygon: Andrew's monotone chain); fewer than three are kept as they are. */
 export function convexHull(points: [number, number][]): [number, number][] {
-  return points.length < 3 ? points : polygonHull(points) ?? points;
+  return points.length < 3 ? points : (polygonHull(points) ?? points);
 }
 
 /** Most corners of an uploaded mesh taken into its outline; a larger mesh is sampled evenly. */
@@ -136,11 +182,16 @@ export function partOutlines(doc: unknown, right: Vec, up: Vec, meshCorners: Mes
     rotationFromDegrees(m, rx, ry, rz);
     const [px, py, pz] = vec(p.position);
     const project = ([x, y, z]: Vec): [number, number] => {
-      const wx = m[0] * x + m[1] * y + m[2] * z + px, wy = m[3] * x + m[4] * y + m[5] * z + py, wz = m[6] * x + m[7] * y + m[8] * z + pz;
+      const wx = m[0] * x + m[1] * y + m[2] * z + px,
+        wy = m[3] * x + m[4] * y + m[5] * z + py,
+        wz = m[6] * x + m[7] * y + m[8] * z + pz;
       return [wx * right[0] + wy * right[1] + wz * right[2], wx * up[0] + wy * up[1] + wz * up[2]];
     };
-    const id = typeof p.id === 'string' ? p.id : `#${i}`, mode = p.mode === 'remove' ? 'remove' : 'add';
-    const pieces = localPieces(p, meshCorners)?.filter((g) => g.length >= 3).map((g) => counterClockwise(convexHull(g.map(project))));
+    const id = typeof p.id === 'string' ? p.id : `#${i}`,
+      mode = p.mode === 'remove' ? 'remove' : 'add';
+    const pieces = localPieces(p, meshCorners)
+      ?.filter((g) => g.length >= 3)
+      .map((g) => counterClockwise(convexHull(g.map(project))));
     if (pieces && pieces.length > 0) return [{ id, mode, points: convexHull(pieces.flat()), pieces } as Outline];
     const projected = localSamples(p, meshCorners).map(project);
     if (projected.length === 0) return [];
@@ -164,7 +215,8 @@ export interface PartDrawing {
 export function partDrawing(doc: unknown, meshCorners: MeshCorners = () => undefined): PartDrawing {
   const grip = (doc as { grip?: { axis?: unknown; faceNormal?: unknown } } | null)?.grip;
   const up: Vec = Array.isArray(grip?.axis) && grip.axis.length === 3 ? vec(grip.axis) : [0, 0, 1];
-  const face: Vec = Array.isArray(grip?.faceNormal) && grip.faceNormal.length === 3 ? vec(grip.faceNormal) : Math.abs(up[0]) < 0.9 ? [1, 0, 0] : [0, 1, 0];
+  const face: Vec =
+    Array.isArray(grip?.faceNormal) && grip.faceNormal.length === 3 ? vec(grip.faceNormal) : Math.abs(up[0]) < 0.9 ? [1, 0, 0] : [0, 1, 0];
   const right: Vec = [up[1] * face[2] - up[2] * face[1], up[2] * face[0] - up[0] * face[2], up[0] * face[1] - up[1] * face[0]];
   const missing = new Set<string>();
   const counted: MeshCorners = (id) => {

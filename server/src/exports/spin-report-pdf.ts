@@ -40,16 +40,31 @@ const reportFont = () => (font ??= readFileSync(require.resolve('dejavu-fonts-tt
 
 /** The spin report of one variant as a PDF (pdfkit, with DejaVu Sans embedded: no font download). */
 export function spinReportPdf(v: PdfVariant): Promise<Buffer> {
-  const doc = new PDFDocument({ size: 'A4', margin: 48, info: { Title: `${v.partName} v${v.number} — spin report`, Author: 'Tumblewise' } });
+  const doc = new PDFDocument({
+    size: 'A4',
+    margin: 48,
+    info: { Title: `${v.partName} v${v.number} — spin report`, Author: 'Tumblewise' },
+  });
   doc.registerFont('report', reportFont()).font('report');
   const chunks: Buffer[] = [];
   doc.on('data', (c: Buffer) => chunks.push(c));
-  const done = new Promise<Buffer>((resolve, reject) => { doc.on('end', () => resolve(Buffer.concat(chunks))); doc.on('error', reject); });
+  const done = new Promise<Buffer>((resolve, reject) => {
+    doc.on('end', () => resolve(Buffer.concat(chunks)));
+    doc.on('error', reject);
+  });
   const r = v.report;
   const teal = '#0f5c63';
 
-  doc.fillColor(teal).fontSize(20).text(`${v.partName} · v${v.number}${v.label ? ` ${v.label}` : ''}`);
-  doc.fillColor('#333').fontSize(10).text(`${v.projectName} · ${v.workspaceName} · status ${v.status.replace('_', ' ')} · ${v.author ?? 'unknown author'} · ${v.createdAt.toISOString().slice(0, 10)} · ${v.engineVersion}`);
+  doc
+    .fillColor(teal)
+    .fontSize(20)
+    .text(`${v.partName} · v${v.number}${v.label ? ` ${v.label}` : ''}`);
+  doc
+    .fillColor('#333')
+    .fontSize(10)
+    .text(
+      `${v.projectName} · ${v.workspaceName} · status ${v.status.replace('_', ' ')} · ${v.author ?? 'unknown author'} · ${v.createdAt.toISOString().slice(0, 10)} · ${v.engineVersion}`,
+    );
   doc.moveDown(0.6);
   const cautions = CAUTIONS.join(' ');
   const cautionHeight = doc.fontSize(8.5).heightOfString(cautions, { width: 483 }) + 14;
@@ -86,7 +101,9 @@ export function spinReportPdf(v: PdfVariant): Promise<Buffer> {
     ['Volume', `${fmt(toDisplay(r.volume, 'volume', 'cm³'))} cm³`],
     ['Centre of mass (part axes)', r.centerOfMass.map((c) => mm(c)).join(', ')],
     ['Principal moments I1 ≥ I2 ≥ I3', r.principal.moments.map(gcm2).join(' · ')],
-    ...r.principal.axes.map((a, i) => [`Axis ${['major', 'intermediate', 'minor'][i]}`, `[${a.map((c) => fmt(c, 3)).join(', ')}]`] as [string, string]),
+    ...r.principal.axes.map(
+      (a, i) => [`Axis ${['major', 'intermediate', 'minor'][i]}`, `[${a.map((c) => fmt(c, 3)).join(', ')}]`] as [string, string],
+    ),
   ]);
   table('Spin', [
     ['Misalignment from nearest axis', `${fmt(r.spin.misalignmentDeg, 3)}°`],
@@ -105,7 +122,10 @@ export function spinReportPdf(v: PdfVariant): Promise<Buffer> {
     ['Centre of percussion from the butt', mm(r.trade.pivot?.centreOfPercussion)],
   ]);
   if (r.checks.length) {
-    table('Category checks (indicative)', r.checks.map((c) => [c.title, `${c.status.toUpperCase()} — ${c.rule}`] as [string, string]));
+    table(
+      'Category checks (indicative)',
+      r.checks.map((c) => [c.title, `${c.status.toUpperCase()} — ${c.rule}`] as [string, string]),
+    );
   }
   if (r.notes.length) {
     if (doc.fontSize(12).y + 60 > bottom()) doc.addPage();
@@ -131,7 +151,10 @@ function drawPart(doc: PDFKit.PDFDocument, { right, up, outlines, meshesLeftOut 
   const ty = (y: number) => box.y + box.h / 2 - (y - (minY + maxY) / 2) * s;
   doc.save().rect(box.x, box.y, box.w, box.h).stroke('#cccccc');
   for (const o of outlines) {
-    if (o.points.length === 1) { doc.circle(tx(o.points[0][0]), ty(o.points[0][1]), 2.5).fill('#b3261e'); continue; }
+    if (o.points.length === 1) {
+      doc.circle(tx(o.points[0][0]), ty(o.points[0][1]), 2.5).fill('#b3261e');
+      continue;
+    }
     if (o.pieces) {
       // One path of counter-clockwise pieces filled by the non-zero rule: their union, holes kept, in one even tint.
       for (const piece of o.pieces) doc.polygon(...piece.map(([x, y]) => [tx(x), ty(y)] as [number, number]));
@@ -144,13 +167,27 @@ function drawPart(doc: PDFKit.PDFDocument, { right, up, outlines, meshesLeftOut 
     else doc.fillOpacity(0.55).fillAndStroke('#7fb7bb', teal()).fillOpacity(1);
   }
   const c = r.centerOfMass;
-  const cx = tx(c[0] * right[0] + c[1] * right[1] + c[2] * right[2]), cy = ty(c[0] * up[0] + c[1] * up[1] + c[2] * up[2]);
-  doc.circle(cx, cy, 3).fill('#222').fontSize(7).fillColor('#222').text('centre of mass', cx + 5, cy - 3);
+  const cx = tx(c[0] * right[0] + c[1] * right[1] + c[2] * right[2]),
+    cy = ty(c[0] * up[0] + c[1] * up[1] + c[2] * up[2]);
+  doc
+    .circle(cx, cy, 3)
+    .fill('#222')
+    .fontSize(7)
+    .fillColor('#222')
+    .text('centre of mass', cx + 5, cy - 3);
   doc.restore();
   doc.x = 48;
   doc.y = box.y + box.h + 6;
-  const leftOut = meshesLeftOut === 0 ? '' : meshesLeftOut === 1 ? '; one uploaded mesh could not be read and is not drawn' : `; ${meshesLeftOut} uploaded meshes could not be read and are not drawn`;
-  doc.fillColor('#666').fontSize(7.5).text(`Side view, long axis up (part z when there is no grip frame); dashed: removed material${leftOut}.`);
+  const leftOut =
+    meshesLeftOut === 0
+      ? ''
+      : meshesLeftOut === 1
+        ? '; one uploaded mesh could not be read and is not drawn'
+        : `; ${meshesLeftOut} uploaded meshes could not be read and are not drawn`;
+  doc
+    .fillColor('#666')
+    .fontSize(7.5)
+    .text(`Side view, long axis up (part z when there is no grip frame); dashed: removed material${leftOut}.`);
 }
 
 const teal = () => '#0f5c63';

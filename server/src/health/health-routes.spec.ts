@@ -15,7 +15,9 @@ describe('GET /health', () => {
     try {
       const res = await request(t.app).get('/api/v1/health').expect(200);
       expect(res.body).toMatchObject({ status: 'ok', database: 'up', mail: 'up', payment: 'up' });
-    } finally { await t.close(); }
+    } finally {
+      await t.close();
+    }
   });
 
   it('says degraded when the mail server and the payment fake do not answer', async () => {
@@ -23,7 +25,9 @@ describe('GET /health', () => {
     try {
       const res = await request(t.app).get('/api/v1/health').expect(200);
       expect(res.body).toMatchObject({ status: 'degraded', database: 'up', mail: 'down', payment: 'down' });
-    } finally { await t.close(); }
+    } finally {
+      await t.close();
+    }
   });
 });
 
@@ -37,14 +41,20 @@ describe('GET /health/live', () => {
       expect(res.headers['cache-control']).toBe('no-store');
       const full = await request(t.app).get('/api/v1/health').expect(200);
       expect(full.body.status).toBe('degraded');
-    } finally { await t.close(); }
+    } finally {
+      await t.close();
+    }
   });
 });
 
 describe('PostgreSQL stopped and started again', () => {
   // A cluster of this test's own, so stopping it disturbs no other suite.
   const cluster = new PostgresCluster({
-    dataDir: path.join(process.env.TEST_ROOT!, `pg-outage-${process.pid}`), port: 0, user: 'tumblewise', password: 'outage-test-password', throwaway: true,
+    dataDir: path.join(process.env.TEST_ROOT!, `pg-outage-${process.pid}`),
+    port: 0,
+    user: 'tumblewise',
+    password: 'outage-test-password',
+    throwaway: true,
   });
 
   afterAll(() => cluster.destroy());

@@ -32,7 +32,9 @@ export function healthRoutes(ctx: AppContext): Router {
   const router = Router();
   const route = routeGroup(router, ctx.catalogue, '');
   route({
-    method: 'get', path: '/health/live', summary: 'Whether this server process answers at all; checks no other service.',
+    method: 'get',
+    path: '/health/live',
+    summary: 'Whether this server process answers at all; checks no other service.',
     access: { kind: 'public' },
     success: { status: 200, description: 'The process is alive.', schema: livenessSchema },
     handler: (_input, _req, res) => {
@@ -41,18 +43,27 @@ export function healthRoutes(ctx: AppContext): Router {
     },
   });
   route({
-    method: 'get', path: '/health', summary: 'Whether the database, the mail server and the payment provider answer.',
-    access: { kind: 'public' }, errors: [503],
+    method: 'get',
+    path: '/health',
+    summary: 'Whether the database, the mail server and the payment provider answer.',
+    access: { kind: 'public' },
+    errors: [503],
     success: { status: 200, description: 'Service states.', schema: healthSchema },
     handler: async (_input, _req, res) => {
       const [database, mail, payment] = await Promise.all([databaseUp(ctx), ctx.mailer.isReachable(), ctx.payment.isReachable()]);
       const state = (up: boolean) => (up ? 'up' : 'down') as 'up' | 'down';
       const body = {
         status: !database ? 'unavailable' : mail && payment ? 'ok' : 'degraded',
-        database: state(database), mail: state(mail), payment: state(payment), checkedAt: new Date().toISOString(),
+        database: state(database),
+        mail: state(mail),
+        payment: state(payment),
+        checkedAt: new Date().toISOString(),
       };
       if (!database) {
-        res.status(503).set('Retry-After', '5').json({ ...body, error: { code: 'database_unavailable', message: 'The database is not reachable right now.' } });
+        res
+          .status(503)
+          .set('Retry-After', '5')
+          .json({ ...body, error: { code: 'database_unavailable', message: 'The database is not reachable right now.' } });
         return undefined;
       }
       return body;

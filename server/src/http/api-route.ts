@@ -9,11 +9,7 @@ import type { ApiCatalogue } from './api-catalogue';
 
 /** Who may call a route. */
 export type Access =
-  | { kind: 'public' }
-  | { kind: 'optional-user' }
-  | { kind: 'user' }
-  | { kind: 'workspace'; permission: Permission }
-  | { kind: 'operator' };
+  { kind: 'public' } | { kind: 'optional-user' } | { kind: 'user' } | { kind: 'workspace'; permission: Permission } | { kind: 'operator' };
 
 export interface RouteInput<B, Q, P> {
   body: B;
@@ -48,9 +44,16 @@ export interface RouteSpec<B extends z.ZodType, Q extends z.ZodType, P extends z
 }
 
 const ERROR_TEXT: Record<number, string> = {
-  400: 'Bad input; the error names the field.', 401: 'Not signed in.', 403: 'The role is too low.',
-  404: 'Not found, or another workspace’s.', 409: 'Conflict with the current state.', 410: 'The link expired or was used.',
-  413: 'Too large.', 422: 'Cannot be analysed.', 429: 'Too many attempts; see Retry-After.', 503: 'A service is unavailable.',
+  400: 'Bad input; the error names the field.',
+  401: 'Not signed in.',
+  403: 'The role is too low.',
+  404: 'Not found, or another workspace’s.',
+  409: 'Conflict with the current state.',
+  410: 'The link expired or was used.',
+  413: 'Too large.',
+  422: 'Cannot be analysed.',
+  429: 'Too many attempts; see Retry-After.',
+  503: 'A service is unavailable.',
 };
 
 /**
@@ -112,13 +115,22 @@ function checkAccess(access: Access, auth: RequestAuth | null, req: Request): vo
 
 /** A suspended or read-only workspace takes no writes (exports and reads go on). */
 function assertWritable(req: Request): void {
-  const workspace = (req as Request & { membership?: { workspace: { effectiveState(): string; suspendedReason?: string | null } } }).membership?.workspace;
+  const workspace = (req as Request & { membership?: { workspace: { effectiveState(): string; suspendedReason?: string | null } } })
+    .membership?.workspace;
   const state = workspace?.effectiveState();
   if (state === 'suspended') {
-    throw new AppError(403, 'workspace_suspended', `This workspace is suspended by the platform${workspace?.suspendedReason ? ` (${workspace.suspendedReason})` : ''}: you can sign in and read, but not change anything.`);
+    throw new AppError(
+      403,
+      'workspace_suspended',
+      `This workspace is suspended by the platform${workspace?.suspendedReason ? ` (${workspace.suspendedReason})` : ''}: you can sign in and read, but not change anything.`,
+    );
   }
   if (state === 'read_only') {
-    throw new AppError(403, 'workspace_read_only', 'This workspace is read-only because a payment is overdue: an owner can update the payment method under Subscription. Exports still work.');
+    throw new AppError(
+      403,
+      'workspace_read_only',
+      'This workspace is read-only because a payment is overdue: an owner can update the payment method under Subscription. Exports still work.',
+    );
   }
 }
 
@@ -130,9 +142,17 @@ function describe(fullPath: string, spec: RouteSpec<z.ZodType, z.ZodType, z.ZodT
       ? { description: spec.success.description, content: { 'application/json': { schema: spec.success.schema } } }
       : { description: spec.success.description },
   };
-  const statuses = new Set([400, ...(spec.access.kind === 'public' || spec.access.kind === 'optional-user' ? [] : [401]), ...(spec.access.kind === 'workspace' ? [403, 404] : []), ...(spec.errors ?? [])]);
+  const statuses = new Set([
+    400,
+    ...(spec.access.kind === 'public' || spec.access.kind === 'optional-user' ? [] : [401]),
+    ...(spec.access.kind === 'workspace' ? [403, 404] : []),
+    ...(spec.errors ?? []),
+  ]);
   for (const status of statuses) {
-    responses[status] = { description: ERROR_TEXT[status] ?? 'Error', content: { 'application/json': { schema: { $ref: '#/components/schemas/Error' } } } };
+    responses[status] = {
+      description: ERROR_TEXT[status] ?? 'Error',
+      content: { 'application/json': { schema: { $ref: '#/components/schemas/Error' } } },
+    };
   }
   const pathParams = [...fullPath.matchAll(/:([A-Za-z]+)/g)].map((m) => m[1]);
   return {
@@ -145,13 +165,23 @@ function describe(fullPath: string, spec: RouteSpec<z.ZodType, z.ZodType, z.ZodT
       ...(spec.body ? { body: { content: { 'application/json': { schema: spec.body } } } } : {}),
       ...(spec.query ? { query: spec.query as never } : {}),
     },
-    parameters: pathParams.map((name) => ({ name, in: 'path' as const, required: true, schema: { type: 'string' as const, format: 'uuid' } })),
+    parameters: pathParams.map((name) => ({
+      name,
+      in: 'path' as const,
+      required: true,
+      schema: { type: 'string' as const, format: 'uuid' },
+    })),
     responses,
   };
 }
 
 /** `apiRoute` bound to one router and mount point, keeping the schema types of each route. */
 export function routeGroup(router: Router, catalogue: ApiCatalogue, mount: string) {
-  return <B extends z.ZodType = z.ZodUndefined, Q extends z.ZodType = z.ZodUndefined, P extends z.ZodType = z.ZodType<Record<string, string>>>(spec: RouteSpec<B, Q, P>) =>
-    apiRoute(router, catalogue, mount, spec);
+  return <
+    B extends z.ZodType = z.ZodUndefined,
+    Q extends z.ZodType = z.ZodUndefined,
+    P extends z.ZodType = z.ZodType<Record<string, string>>,
+  >(
+    spec: RouteSpec<B, Q, P>,
+  ) => apiRoute(router, catalogue, mount, spec);
 }

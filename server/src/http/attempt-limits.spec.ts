@@ -4,8 +4,12 @@ import { startTestApp, type TestApp } from '../test-support/test-app';
 
 /** Attempt limits on sign-up and password reset answer 429 with Retry-After (sign-in: two-instances.spec.ts). */
 let t: TestApp;
-beforeAll(async () => { t = await startTestApp({ RATE_LIMIT_SIGNUP: '2', RATE_LIMIT_PASSWORD_RESET: '2', RATE_LIMIT_WINDOW_SECONDS: '600' }); });
-afterAll(async () => { await t.close(); });
+beforeAll(async () => {
+  t = await startTestApp({ RATE_LIMIT_SIGNUP: '2', RATE_LIMIT_PASSWORD_RESET: '2', RATE_LIMIT_WINDOW_SECONDS: '600' });
+});
+afterAll(async () => {
+  await t.close();
+});
 
 it('limits sign-ups per address and writes nothing once limited', async () => {
   const body = (n: number) => ({ workspaceName: `Limit ${n}`, name: 'N', email: `limit-${n}@example.test`, password: 'limit-password-1' });

@@ -14,10 +14,16 @@ export class AttemptLimits {
   readonly passwordReset: RateLimiterPostgres;
 
   constructor(sequelize: Sequelize, limits: Config['limits']) {
-    const make = (keyPrefix: string, points: number) => new RateLimiterPostgres({
-      storeClient: sequelize, storeType: 'sequelize', tableName: 'rate_limits', tableCreated: true,
-      keyPrefix, points, duration: limits.windowSeconds,
-    });
+    const make = (keyPrefix: string, points: number) =>
+      new RateLimiterPostgres({
+        storeClient: sequelize,
+        storeType: 'sequelize',
+        tableName: 'rate_limits',
+        tableCreated: true,
+        keyPrefix,
+        points,
+        duration: limits.windowSeconds,
+      });
     this.signin = make('signin', limits.signinPerWindow);
     this.signup = make('signup', limits.signupPerWindow);
     this.passwordReset = make('reset', limits.passwordResetPerWindow);
@@ -32,7 +38,9 @@ export function limitAttempts(limiter: RateLimiterPostgres, key: (req: Request) 
     } catch (err) {
       if (err instanceof RateLimiterRes) {
         const seconds = Math.max(1, Math.ceil(err.msBeforeNext / 1000));
-        throw new AppError(429, 'too_many_attempts', `Too many ${what} attempts. Try again in ${seconds} seconds.`, undefined, { 'Retry-After': String(seconds) });
+        throw new AppError(429, 'too_many_attempts', `Too many ${what} attempts. Try again in ${seconds} seconds.`, undefined, {
+          'Retry-After': String(seconds),
+        });
       }
       throw err;
     }

@@ -8,7 +8,9 @@ beforeAll(async () => {
   t = await startTestApp({ JSON_BODY_LIMIT: '16kb' });
   owner = await signUp(t.app);
 });
-afterAll(async () => { await t.close(); });
+afterAll(async () => {
+  await t.close();
+});
 
 const good = { workspaceName: 'Valid Lab', name: 'Valid Person', email: 'valid@example.test', password: 'valid-password-1' };
 const SQL = "x'); DROP TABLE users; --";
@@ -42,7 +44,10 @@ describe('sign-up refuses bad input naming the field, and writes nothing', () =>
     const before = await counts();
     const broken = await request(t.app).post('/api/v1/auth/signup').set('Content-Type', 'application/json').send('{"email": ').expect(400);
     expect(broken.body.error.code).toBe('invalid_json');
-    const huge = await request(t.app).post('/api/v1/auth/signup').send({ ...good, name: 'x'.repeat(20_000) }).expect(413);
+    const huge = await request(t.app)
+      .post('/api/v1/auth/signup')
+      .send({ ...good, name: 'x'.repeat(20_000) })
+      .expect(413);
     expect(huge.body.error.code).toBe('too_large');
     const array = await request(t.app).post('/api/v1/auth/signup').send([good]).expect(400);
     expect(array.body.error.code).toBe('invalid_input');
@@ -62,7 +67,11 @@ describe('workspace routes refuse bad input', () => {
   it('invitation: bad e-mail, bad role → 400 naming the field, no invitation written', async () => {
     const base = `/api/v1/workspaces/${owner.workspace.id}`;
     const before = await Invitation.count();
-    for (const [body, field] of [[{ email: 'not-an-address', role: 'designer' }, 'email'], [{ email: 'a@example.test', role: SQL }, 'role'], [{ email: 'a@example.test' }, 'role']] as const) {
+    for (const [body, field] of [
+      [{ email: 'not-an-address', role: 'designer' }, 'email'],
+      [{ email: 'a@example.test', role: SQL }, 'role'],
+      [{ email: 'a@example.test' }, 'role'],
+    ] as const) {
       const res = await request(t.app).post(`${base}/invitations`).set(bearer(owner.accessToken)).send(body).expect(400);
       expect(res.body.error.field).toBe(field);
     }
@@ -72,24 +81,47 @@ describe('workspace routes refuse bad input', () => {
   it('project: unknown category, long name → 400, nothing written', async () => {
     const base = `/api/v1/workspaces/${owner.workspace.id}`;
     const before = await Project.count();
-    expect((await request(t.app).post(`${base}/projects`).set(bearer(owner.accessToken)).send({ name: 'P', category: 'trebuchet' }).expect(400)).body.error.field).toBe('category');
-    expect((await request(t.app).post(`${base}/projects`).set(bearer(owner.accessToken)).send({ name: 'p'.repeat(121), category: 'bat' }).expect(400)).body.error.field).toBe('name');
+    expect(
+      (await request(t.app).post(`${base}/projects`).set(bearer(owner.accessToken)).send({ name: 'P', category: 'trebuchet' }).expect(400))
+        .body.error.field,
+    ).toBe('category');
+    expect(
+      (
+        await request(t.app)
+          .post(`${base}/projects`)
+          .set(bearer(owner.accessToken))
+          .send({ name: 'p'.repeat(121), category: 'bat' })
+          .expect(400)
+      ).body.error.field,
+    ).toBe('name');
     expect(await Project.count()).toBe(before);
   });
 
   it('malformed ids in the path are 404, never a server error', async () => {
     for (const id of ['not-a-uuid', "1' OR '1'='1", '%00', 'ñ'.repeat(40)]) {
-      const res = await request(t.app).get(`/api/v1/workspaces/${encodeURIComponent(id)}/members`).set(bearer(owner.accessToken));
+      const res = await request(t.app)
+        .get(`/api/v1/workspaces/${encodeURIComponent(id)}/members`)
+        .set(bearer(owner.accessToken));
       expect(res.status).toBe(404);
-      const member = await request(t.app).delete(`/api/v1/workspaces/${owner.workspace.id}/members/${encodeURIComponent(id)}`).set(bearer(owner.accessToken));
+      const member = await request(t.app)
+        .delete(`/api/v1/workspaces/${owner.workspace.id}/members/${encodeURIComponent(id)}`)
+        .set(bearer(owner.accessToken));
       expect(member.status).toBe(404);
     }
   });
 
   it('bad query values name the field', async () => {
-    const res = await request(t.app).get(`/api/v1/workspaces/${owner.workspace.id}/audit`).query({ page: 'first' }).set(bearer(owner.accessToken)).expect(400);
+    const res = await request(t.app)
+      .get(`/api/v1/workspaces/${owner.workspace.id}/audit`)
+      .query({ page: 'first' })
+      .set(bearer(owner.accessToken))
+      .expect(400);
     expect(res.body.error.field).toBe('page');
-    const size = await request(t.app).get(`/api/v1/workspaces/${owner.workspace.id}/audit`).query({ pageSize: 100000 }).set(bearer(owner.accessToken)).expect(400);
+    const size = await request(t.app)
+      .get(`/api/v1/workspaces/${owner.workspace.id}/audit`)
+      .query({ pageSize: 100000 })
+      .set(bearer(owner.accessToken))
+      .expect(400);
     expect(size.body.error.field).toBe('pageSize');
   });
 });

@@ -6,7 +6,11 @@ import { AppError } from './app-error';
  * workspace's row is never found.
  */
 export async function findInWorkspace<M extends Model>(
-  model: ModelStatic<M>, id: string, workspaceId: string, what: string, options: Omit<FindOptions<M>, 'where'> & { where?: WhereOptions } = {},
+  model: ModelStatic<M>,
+  id: string,
+  workspaceId: string,
+  what: string,
+  options: Omit<FindOptions<M>, 'where'> & { where?: WhereOptions } = {},
 ): Promise<M> {
   const { where, ...rest } = options;
   const row = await model.findOne({ ...rest, where: { ...(where as object), id, workspaceId } as WhereOptions });

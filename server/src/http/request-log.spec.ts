@@ -7,10 +7,17 @@ import { bearer, signUp, startTestApp, type TestApp } from '../test-support/test
 let t: TestApp;
 const lines: string[] = [];
 beforeAll(async () => {
-  const sink = new Writable({ write(chunk, _enc, done) { lines.push(...String(chunk).split('\n').filter(Boolean)); done(); } });
+  const sink = new Writable({
+    write(chunk, _enc, done) {
+      lines.push(...String(chunk).split('\n').filter(Boolean));
+      done();
+    },
+  });
   t = await startTestApp({ LOG_LEVEL: 'info' }, { logStream: sink });
 });
-afterAll(async () => { await t.close(); });
+afterAll(async () => {
+  await t.close();
+});
 
 it('logs each API request as JSON without passwords, tokens or cookies', async () => {
   const s = await signUp(t.app, { password: 'very-secret-password-9' });
@@ -23,9 +30,14 @@ it('logs each API request as JSON without passwords, tokens or cookies', async (
 
   const entries = lines.map((l) => JSON.parse(l) as { req?: { method: string; url: string }; res?: { statusCode: number } });
   const requests = entries.filter((e) => e.req && e.res);
-  expect(requests.map((e) => `${e.req!.method} ${e.req!.url.split('?')[0]} ${e.res!.statusCode}`)).toEqual(expect.arrayContaining([
-    'POST /api/v1/auth/signin 200', 'POST /api/v1/auth/refresh 200', 'GET /api/v1/me 200', 'GET /api/v1/invitations/preview 410',
-  ]));
+  expect(requests.map((e) => `${e.req!.method} ${e.req!.url.split('?')[0]} ${e.res!.statusCode}`)).toEqual(
+    expect.arrayContaining([
+      'POST /api/v1/auth/signin 200',
+      'POST /api/v1/auth/refresh 200',
+      'GET /api/v1/me 200',
+      'GET /api/v1/invitations/preview 410',
+    ]),
+  );
   const all = lines.join('\n');
   for (const secret of ['very-secret-password-9', s.accessToken, s.cookie.split('=')[1], token]) {
     expect(all.includes(secret)).toBe(false);

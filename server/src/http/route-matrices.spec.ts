@@ -11,7 +11,20 @@ const NOWHERE = '00000000-0000-4000-8000-000000000000';
 let t: TestApp;
 type Actor = { token: string; workspaceId: string };
 const tokens: Partial<Record<Role, Actor>> = {};
-let other: Record<'workspaceId' | 'memberId' | 'invitationId' | 'materialId' | 'projectId' | 'partId' | 'variantId' | 'meshId' | 'studyId' | 'measurementId' | 'importId', string>;
+let other: Record<
+  | 'workspaceId'
+  | 'memberId'
+  | 'invitationId'
+  | 'materialId'
+  | 'projectId'
+  | 'partId'
+  | 'variantId'
+  | 'meshId'
+  | 'studyId'
+  | 'measurementId'
+  | 'importId',
+  string
+>;
 
 /** A valid body for each write route, so the tenancy checks reach the row lookup. */
 const VALID_BODIES: Record<string, object> = {
@@ -23,7 +36,9 @@ const VALID_BODIES: Record<string, object> = {
   'patch /workspaces/:workspaceId/materials/:materialId': { name: 'Renamed' },
   'post /workspaces/:workspaceId/projects/:projectId/parts': { name: 'Matrix part' },
   'patch /workspaces/:workspaceId/parts/:partId': { draftVersion: 1, name: 'Renamed' },
-  'post /workspaces/:workspaceId/parts/:partId/variants': { document: { primitives: [{ id: 'a', shape: 'sphere', radius: 0.1, density: 500 }], spin: { axis: [0, 0, 1], rate: 1 } } },
+  'post /workspaces/:workspaceId/parts/:partId/variants': {
+    document: { primitives: [{ id: 'a', shape: 'sphere', radius: 0.1, density: 500 }], spin: { axis: [0, 0, 1], rate: 1 } },
+  },
   'patch /workspaces/:workspaceId/variants/:variantId': { version: 1, label: 'x' },
   'post /workspaces/:workspaceId/variants/:variantId/review/request': { reviewerId: '00000000-0000-4000-8000-000000000000' },
   'post /workspaces/:workspaceId/variants/:variantId/review/comments': { body: 'A comment' },
@@ -33,8 +48,17 @@ const VALID_BODIES: Record<string, object> = {
 
 /** Ids that exist nowhere: an allowed role reaches the lookup (404) or validation (400). */
 const NOWHERE_IDS = (workspaceId: string) => ({
-  workspaceId, memberId: NOWHERE, invitationId: NOWHERE, materialId: NOWHERE, projectId: NOWHERE, partId: NOWHERE, variantId: NOWHERE,
-  meshId: NOWHERE, studyId: NOWHERE, measurementId: NOWHERE, importId: NOWHERE,
+  workspaceId,
+  memberId: NOWHERE,
+  invitationId: NOWHERE,
+  materialId: NOWHERE,
+  projectId: NOWHERE,
+  partId: NOWHERE,
+  variantId: NOWHERE,
+  meshId: NOWHERE,
+  studyId: NOWHERE,
+  measurementId: NOWHERE,
+  importId: NOWHERE,
 });
 
 beforeAll(async () => {
@@ -49,23 +73,78 @@ beforeAll(async () => {
   }
   const b = await signUp(t.app, { workspaceName: 'Tenant B' });
   const bMember = await Membership.findOne({ where: { workspaceId: b.workspace.id } });
-  const inv = await request(t.app).post(`/api/v1/workspaces/${b.workspace.id}/invitations`).set(bearer(b.accessToken))
-    .send({ email: 'b-invitee@example.test', role: 'reviewer' }).expect(201);
-  const material = await Material.create({ workspaceId: b.workspace.id, name: 'B wood', family: 'wood', density: 600, densityTolerance: 0.05, source: 'test' });
+  const inv = await request(t.app)
+    .post(`/api/v1/workspaces/${b.workspace.id}/invitations`)
+    .set(bearer(b.accessToken))
+    .send({ email: 'b-invitee@example.test', role: 'reviewer' })
+    .expect(201);
+  const material = await Material.create({
+    workspaceId: b.workspace.id,
+    name: 'B wood',
+    family: 'wood',
+    density: 600,
+    densityTolerance: 0.05,
+    source: 'test',
+  });
   const project = await Project.create({ workspaceId: b.workspace.id, name: 'B project', category: 'bat', createdById: b.user.id });
   const part = await Part.create({ workspaceId: b.workspace.id, projectId: project.id, name: 'B part' });
-  const variant = await Variant.create({ workspaceId: b.workspace.id, partId: part.id, number: 1, document: {}, report: {}, engineVersion: 'test', authorId: b.user.id });
-  const mesh = await Mesh.create({ workspaceId: b.workspace.id, name: 'B mesh', sha256: 'x'.repeat(64), byteSize: 1, triangleCount: 1, format: 'binary', data: Buffer.from([0]), report: { fixed: [], warnings: [] }, createdById: b.user.id });
-  const study = await ScatterStudy.create({ workspaceId: b.workspace.id, variantId: variant.id, document: {}, samples: 10, seed: 1, createdById: b.user.id });
-  const reading = await Measurement.create({ workspaceId: b.workspace.id, variantId: variant.id, axis: 'major', value: 0.01, enteredValue: 0.01, enteredUnit: 'kg·m²', method: 'test', createdById: b.user.id, importId: '00000000-0000-4000-8000-0000000000b1' });
+  const variant = await Variant.create({
+    workspaceId: b.workspace.id,
+    partId: part.id,
+    number: 1,
+    document: {},
+    report: {},
+    engineVersion: 'test',
+    authorId: b.user.id,
+  });
+  const mesh = await Mesh.create({
+    workspaceId: b.workspace.id,
+    name: 'B mesh',
+    sha256: 'x'.repeat(64),
+    byteSize: 1,
+    triangleCount: 1,
+    format: 'binary',
+    data: Buffer.from([0]),
+    report: { fixed: [], warnings: [] },
+    createdById: b.user.id,
+  });
+  const study = await ScatterStudy.create({
+    workspaceId: b.workspace.id,
+    variantId: variant.id,
+    document: {},
+    samples: 10,
+    seed: 1,
+    createdById: b.user.id,
+  });
+  const reading = await Measurement.create({
+    workspaceId: b.workspace.id,
+    variantId: variant.id,
+    axis: 'major',
+    value: 0.01,
+    enteredValue: 0.01,
+    enteredUnit: 'kg·m²',
+    method: 'test',
+    createdById: b.user.id,
+    importId: '00000000-0000-4000-8000-0000000000b1',
+  });
   other = {
-    workspaceId: b.workspace.id, memberId: bMember!.id, invitationId: inv.body.id, materialId: material.id,
-    projectId: project.id, partId: part.id, variantId: variant.id, meshId: mesh.id, studyId: study.id,
-    measurementId: reading.id, importId: reading.importId!,
+    workspaceId: b.workspace.id,
+    memberId: bMember!.id,
+    invitationId: inv.body.id,
+    materialId: material.id,
+    projectId: project.id,
+    partId: part.id,
+    variantId: variant.id,
+    meshId: mesh.id,
+    studyId: study.id,
+    measurementId: reading.id,
+    importId: reading.importId!,
   };
   expect(await Invitation.count({ where: { id: other.invitationId } })).toBe(1);
 });
-afterAll(async () => { await t.close(); });
+afterAll(async () => {
+  await t.close();
+});
 
 const workspaceRoutes = () => t.ctx.catalogue.routes.filter((r) => r.path.startsWith('/workspaces/:workspaceId'));
 const key = (r: { method: string; path: string }) => `${r.method} ${r.path}`;
@@ -77,10 +156,13 @@ function bodyFor(route: { method: string; path: string }) {
 }
 
 function fill(path: string, ids: Record<string, string>): string {
-  return '/api/v1' + path.replace(/:([A-Za-z]+)/g, (_m, name: string) => {
-    if (!(name in ids)) throw new Error(`the matrix has no sample id for :${name}; add one`);
-    return ids[name];
-  });
+  return (
+    '/api/v1' +
+    path.replace(/:([A-Za-z]+)/g, (_m, name: string) => {
+      if (!(name in ids)) throw new Error(`the matrix has no sample id for :${name}; add one`);
+      return ids[name];
+    })
+  );
 }
 
 function call(method: string, url: string, token?: string, body?: object) {
@@ -108,7 +190,12 @@ describe('role matrix: each role × each workspace route → allowed or 403', ()
       const res = await call(route.method, url, actor.token, route.method === 'get' || route.method === 'delete' ? undefined : {});
       const allowed = can(role, route.access.permission);
       if (allowed) expect({ route: key(route), status: res.status }).not.toEqual({ route: key(route), status: 403 });
-      else expect({ route: key(route), status: res.status, code: res.body.error?.code }).toEqual({ route: key(route), status: 403, code: 'forbidden' });
+      else
+        expect({ route: key(route), status: res.status, code: res.body.error?.code }).toEqual({
+          route: key(route),
+          status: 403,
+          code: 'forbidden',
+        });
       expect(res.status).not.toBe(401);
     }
   });

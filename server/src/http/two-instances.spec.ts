@@ -15,10 +15,13 @@ let b = '';
 async function startInstance(env: Record<string, string>): Promise<string> {
   const port = await freePort();
   const child = spawn(process.execPath, [path.join(root, 'node_modules/tsx/dist/cli.mjs'), path.join(root, 'server/src/main.ts')], {
-    env: { ...process.env, ...env, PORT: String(port), LOG_LEVEL: 'warn' }, stdio: ['ignore', 'ignore', 'inherit'],
+    env: { ...process.env, ...env, PORT: String(port), LOG_LEVEL: 'warn' },
+    stdio: ['ignore', 'ignore', 'inherit'],
   });
   children.push(child);
-  const exited = new Promise<never>((_, reject) => child.once('exit', (code) => reject(new Error(`the server process exited early (code ${code})`))));
+  const exited = new Promise<never>((_, reject) =>
+    child.once('exit', (code) => reject(new Error(`the server process exited early (code ${code})`))),
+  );
   exited.catch(() => undefined); // exiting later, at teardown, is expected
   await Promise.race([waitForPort(port, 60000), exited]);
   return `http://127.0.0.1:${port}/api/v1`;
@@ -31,12 +34,24 @@ beforeAll(async () => {
 }, 90000);
 
 afterAll(async () => {
-  await Promise.all(children.map((c) => new Promise((resolve) => { c.once('exit', resolve); c.kill('SIGTERM'); })));
+  await Promise.all(
+    children.map(
+      (c) =>
+        new Promise((resolve) => {
+          c.once('exit', resolve);
+          c.kill('SIGTERM');
+        }),
+    ),
+  );
 });
 
 const post = (base: string, p: string, body: unknown, headers: Record<string, string> = {}) =>
   fetch(base + p, { method: 'POST', headers: { 'content-type': 'application/json', ...headers }, body: JSON.stringify(body) });
-const cookieOf = (res: Response) => res.headers.getSetCookie().find((c) => c.startsWith('tw_refresh='))!.split(';')[0];
+const cookieOf = (res: Response) =>
+  res.headers
+    .getSetCookie()
+    .find((c) => c.startsWith('tw_refresh='))!
+    .split(';')[0];
 
 it('shares the sign-in attempt limit between the instances', async () => {
   const email = 'limited@example.test';
@@ -50,7 +65,12 @@ it('shares the sign-in attempt limit between the instances', async () => {
 });
 
 it('a sign-out on one instance ends the session on the other', async () => {
-  const res = await post(a, '/auth/signup', { workspaceName: 'Two Lab', name: 'T', email: 'two@example.test', password: 'right-password-1' });
+  const res = await post(a, '/auth/signup', {
+    workspaceName: 'Two Lab',
+    name: 'T',
+    email: 'two@example.test',
+    password: 'right-password-1',
+  });
   const { accessToken } = (await res.json()) as { accessToken: string };
   const cookie = cookieOf(res);
   expect((await fetch(`${b}/me`, { headers: { authorization: `Bearer ${accessToken}` } })).status).toBe(200);
@@ -60,7 +80,12 @@ it('a sign-out on one instance ends the session on the other', async () => {
 });
 
 it('a refresh token rotated on one instance is recognised as reused on the other', async () => {
-  const res = await post(a, '/auth/signup', { workspaceName: 'Rot Lab', name: 'R', email: 'rot@example.test', password: 'right-password-1' });
+  const res = await post(a, '/auth/signup', {
+    workspaceName: 'Rot Lab',
+    name: 'R',
+    email: 'rot@example.test',
+    password: 'right-password-1',
+  });
   const first = cookieOf(res);
   const rotated = await post(a, '/auth/refresh', {}, { cookie: first });
   expect(rotated.status).toBe(200);

@@ -8,8 +8,12 @@ import { bearer, refreshCookieOf, signUp, startTestApp, type TestApp } from '../
 import { hashToken } from '../accounts/secure-token';
 
 let t: TestApp;
-beforeAll(async () => { t = await startTestApp(); });
-afterAll(async () => { await t.close(); });
+beforeAll(async () => {
+  t = await startTestApp();
+});
+afterAll(async () => {
+  await t.close();
+});
 
 const invite = (app: TestApp['app'], token: string, workspaceId: string, email: string, role = 'designer') =>
   request(app).post(`/api/v1/workspaces/${workspaceId}/invitations`).set(bearer(token)).send({ email, role });
@@ -18,7 +22,13 @@ describe('the invitation flow over HTTP with the real mail', () => {
   it('invites by e-mail; the new teammate accepts from the mail and becomes a member', async () => {
     const owner = await signUp(t.app, { workspaceName: 'Flow Lab' });
     const created = await invite(t.app, owner.accessToken, owner.workspace.id, 'new.mate@example.test').expect(201);
-    expect(created.body).toMatchObject({ email: 'new.mate@example.test', role: 'designer', status: 'pending', delivery: 'sent', invitedBy: { id: owner.user.id } });
+    expect(created.body).toMatchObject({
+      email: 'new.mate@example.test',
+      role: 'designer',
+      status: 'pending',
+      delivery: 'sent',
+      invitedBy: { id: owner.user.id },
+    });
 
     const mail = await waitForMail('new.mate@example.test');
     expect(mail.subject).toBe('Join Flow Lab on Tumblewise');
@@ -27,11 +37,19 @@ describe('the invitation flow over HTTP with the real mail', () => {
     expect(await Invitation.count({ where: { tokenHash: token } })).toBe(0); // only the hash is stored
 
     const preview = await request(t.app).get('/api/v1/invitations/preview').query({ token }).expect(200);
-    expect(preview.body).toMatchObject({ workspaceName: 'Flow Lab', email: 'new.mate@example.test', role: 'designer', accountExists: false });
+    expect(preview.body).toMatchObject({
+      workspaceName: 'Flow Lab',
+      email: 'new.mate@example.test',
+      role: 'designer',
+      accountExists: false,
+    });
 
     const missing = await request(t.app).post('/api/v1/invitations/accept').send({ token, name: 'New Mate' }).expect(400);
     expect(missing.body.error.field).toBe('password');
-    const accepted = await request(t.app).post('/api/v1/invitations/accept').send({ token, name: 'New Mate', password: 'mate-password-1' }).expect(200);
+    const accepted = await request(t.app)
+      .post('/api/v1/invitations/accept')
+      .send({ token, name: 'New Mate', password: 'mate-password-1' })
+      .expect(200);
     expect(accepted.body.workspace.id).toBe(owner.workspace.id);
     expect(accepted.body.memberships).toEqual([expect.objectContaining({ role: 'designer' })]);
     refreshCookieOf(accepted.headers['set-cookie']);
@@ -51,7 +69,10 @@ describe('the invitation flow over HTTP with the real mail', () => {
     const token = linkToken(await waitForMail('has.account@example.test'), '/invitations/accept');
     const preview = await request(t.app).get('/api/v1/invitations/preview').query({ token }).expect(200);
     expect(preview.body.accountExists).toBe(true);
-    const anonymous = await request(t.app).post('/api/v1/invitations/accept').send({ token, name: 'X', password: 'whatever-pass-1' }).expect(409);
+    const anonymous = await request(t.app)
+      .post('/api/v1/invitations/accept')
+      .send({ token, name: 'X', password: 'whatever-pass-1' })
+      .expect(409);
     expect(anonymous.body.error.code).toBe('account_exists');
     const res = await request(t.app).post('/api/v1/invitations/accept').set(bearer(invitee.accessToken)).send({ token }).expect(200);
     expect(res.body.memberships.map((m: { role: string }) => m.role).sort()).toEqual(['owner', 'reviewer']);
@@ -69,9 +90,14 @@ describe('the invitation flow over HTTP with the real mail', () => {
 
   it('refuses duplicates: an existing member, a pending invitation', async () => {
     const owner = await signUp(t.app);
-    expect((await invite(t.app, owner.accessToken, owner.workspace.id, owner.user.email).expect(409)).body.error.code).toBe('already_member');
+    expect((await invite(t.app, owner.accessToken, owner.workspace.id, owner.user.email).expect(409)).body.error.code).toBe(
+      'already_member',
+    );
     await invite(t.app, owner.accessToken, owner.workspace.id, 'dup@example.test').expect(201);
-    expect((await invite(t.app, owner.accessToken, owner.workspace.id, 'DUP@example.test').expect(409)).body.error).toMatchObject({ code: 'already_invited', field: 'email' });
+    expect((await invite(t.app, owner.accessToken, owner.workspace.id, 'DUP@example.test').expect(409)).body.error).toMatchObject({
+      code: 'already_invited',
+      field: 'email',
+    });
   });
 
   it('lets only an owner invite an owner', async () => {
@@ -94,7 +120,10 @@ describe('expiry, revoke and re-send', () => {
     await Invitation.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { tokenHash: hashToken(token) } });
     await request(t.app).get('/api/v1/invitations/preview').query({ token }).expect(410);
     await request(t.app).post('/api/v1/invitations/accept').send({ token, name: 'Late', password: 'late-password-1' }).expect(410);
-    const list = await request(t.app).get(`/api/v1/workspaces/${owner.workspace.id}/invitations`).set(bearer(owner.accessToken)).expect(200);
+    const list = await request(t.app)
+      .get(`/api/v1/workspaces/${owner.workspace.id}/invitations`)
+      .set(bearer(owner.accessToken))
+      .expect(200);
     expect(list.body[0].status).toBe('expired');
     // A fresh invitation to the same address is allowed once the old one expired.
     await invite(t.app, owner.accessToken, owner.workspace.id, 'late@example.test').expect(201);
@@ -104,19 +133,30 @@ describe('expiry, revoke and re-send', () => {
     const owner = await signUp(t.app);
     const a = await invite(t.app, owner.accessToken, owner.workspace.id, 'revoke-me@example.test').expect(201);
     const tokenA = linkToken(await waitForMail('revoke-me@example.test'), '/invitations/accept');
-    const revoked = await request(t.app).delete(`/api/v1/workspaces/${owner.workspace.id}/invitations/${a.body.id}`).set(bearer(owner.accessToken)).expect(200);
+    const revoked = await request(t.app)
+      .delete(`/api/v1/workspaces/${owner.workspace.id}/invitations/${a.body.id}`)
+      .set(bearer(owner.accessToken))
+      .expect(200);
     expect(revoked.body.status).toBe('revoked');
     await request(t.app).post('/api/v1/invitations/accept').send({ token: tokenA, name: 'R', password: 'revoked-pass-1' }).expect(410);
-    await request(t.app).post(`/api/v1/workspaces/${owner.workspace.id}/invitations/${a.body.id}/resend`).set(bearer(owner.accessToken)).expect(409);
+    await request(t.app)
+      .post(`/api/v1/workspaces/${owner.workspace.id}/invitations/${a.body.id}/resend`)
+      .set(bearer(owner.accessToken))
+      .expect(409);
 
     const b = await invite(t.app, owner.accessToken, owner.workspace.id, 'resend-me@example.test').expect(201);
     const first = linkToken(await waitForMail('resend-me@example.test'), '/invitations/accept');
-    await request(t.app).post(`/api/v1/workspaces/${owner.workspace.id}/invitations/${b.body.id}/resend`).set(bearer(owner.accessToken)).expect(200);
+    await request(t.app)
+      .post(`/api/v1/workspaces/${owner.workspace.id}/invitations/${b.body.id}/resend`)
+      .set(bearer(owner.accessToken))
+      .expect(200);
     const second = linkToken(await waitForMail('resend-me@example.test', { count: 2 }), '/invitations/accept');
     expect(second).not.toBe(first);
     await request(t.app).get('/api/v1/invitations/preview').query({ token: first }).expect(410);
     await request(t.app).get('/api/v1/invitations/preview').query({ token: second }).expect(200);
-    const actions = (await AuditEvent.findAll({ where: { workspaceId: owner.workspace.id }, order: [['createdAt', 'ASC']] })).map((e) => e.action);
+    const actions = (await AuditEvent.findAll({ where: { workspaceId: owner.workspace.id }, order: [['createdAt', 'ASC']] })).map(
+      (e) => e.action,
+    );
     expect(actions).toEqual(expect.arrayContaining(['invitation.revoked', 'invitation.resent']));
   });
 });
@@ -136,7 +176,10 @@ describe('mail server down, then back', () => {
       expect(await AuditEvent.count({ where: { workspaceId: owner.workspace.id, action: 'invitation.delivery_failed' } })).toBe(1);
 
       await catcher.start();
-      const again = await request(own.app).post(`/api/v1/workspaces/${owner.workspace.id}/invitations/${res.body.id}/resend`).set(bearer(owner.accessToken)).expect(200);
+      const again = await request(own.app)
+        .post(`/api/v1/workspaces/${owner.workspace.id}/invitations/${res.body.id}/resend`)
+        .set(bearer(owner.accessToken))
+        .expect(200);
       expect(again.body).toMatchObject({ delivery: 'sent', deliveryError: null });
       const mail = await waitForMail('offline@example.test', { inboxUrl: catcher.inboxUrl });
       const token = linkToken(mail, '/invitations/accept');

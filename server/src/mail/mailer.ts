@@ -14,8 +14,15 @@ export class Mailer {
 
   constructor(private readonly config: Config['mail']) {
     this.transport = nodemailer.createTransport({
-      host: config.host, port: config.port, secure: false, ignoreTLS: true, pool: true, maxConnections: 2,
-      connectionTimeout: 3000, greetingTimeout: 3000, socketTimeout: 10000,
+      host: config.host,
+      port: config.port,
+      secure: false,
+      ignoreTLS: true,
+      pool: true,
+      maxConnections: 2,
+      connectionTimeout: 3000,
+      greetingTimeout: 3000,
+      socketTimeout: 10000,
     });
   }
 

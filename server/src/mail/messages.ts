@@ -13,7 +13,14 @@ ${paragraphs.map((p) => `<p>${escape(p)}</p>`).join('\n')}
 }
 
 /** The invitation e-mail with its accept link. */
-export function invitationMail(args: { to: string; workspaceName: string; inviterName: string | null; role: string; url: string; days: number }): OutgoingMail {
+export function invitationMail(args: {
+  to: string;
+  workspaceName: string;
+  inviterName: string | null;
+  role: string;
+  url: string;
+  days: number;
+}): OutgoingMail {
   const who = args.inviterName ? `${args.inviterName} invites you` : 'You are invited';
   const lines = [
     `${who} to join the workspace "${args.workspaceName}" on Tumblewise as ${args.role}.`,
@@ -23,23 +30,44 @@ export function invitationMail(args: { to: string; workspaceName: string; invite
     to: args.to,
     subject: `Join ${args.workspaceName} on Tumblewise`,
     text: `${lines.join('\n')}\n\nAccept the invitation: ${args.url}\n\nIf you did not expect this, ignore this e-mail.`,
-    html: layout(`Join ${args.workspaceName}`, lines, { label: 'Accept the invitation', url: args.url }, 'If you did not expect this, ignore this e-mail.'),
+    html: layout(
+      `Join ${args.workspaceName}`,
+      lines,
+      { label: 'Accept the invitation', url: args.url },
+      'If you did not expect this, ignore this e-mail.',
+    ),
   };
 }
 
 /** The password-reset e-mail with its single-use link. */
 export function passwordResetMail(args: { to: string; name: string; url: string; minutes: number }): OutgoingMail {
-  const lines = [`Hello ${args.name},`, `someone asked to reset the password of your Tumblewise account. The link works once and expires in ${args.minutes} minutes.`];
+  const lines = [
+    `Hello ${args.name},`,
+    `someone asked to reset the password of your Tumblewise account. The link works once and expires in ${args.minutes} minutes.`,
+  ];
   return {
     to: args.to,
     subject: 'Reset your Tumblewise password',
     text: `${lines.join('\n')}\n\nChoose a new password: ${args.url}\n\nIf it was not you, ignore this e-mail; your password stays as it is.`,
-    html: layout('Reset your password', lines, { label: 'Choose a new password', url: args.url }, 'If it was not you, ignore this e-mail; your password stays as it is.'),
+    html: layout(
+      'Reset your password',
+      lines,
+      { label: 'Choose a new password', url: args.url },
+      'If it was not you, ignore this e-mail; your password stays as it is.',
+    ),
   };
 }
 
 /** Asks a reviewer to sign a variant off. */
-export function reviewRequestMail(args: { to: string; reviewerName: string; requesterName: string; variantLabel: string; partName: string; message: string; url: string }): OutgoingMail {
+export function reviewRequestMail(args: {
+  to: string;
+  reviewerName: string;
+  requesterName: string;
+  variantLabel: string;
+  partName: string;
+  message: string;
+  url: string;
+}): OutgoingMail {
   const lines = [
     `Hello ${args.reviewerName},`,
     `${args.requesterName} asks you to review ${args.variantLabel} of "${args.partName}" and approve it or send it back.`,
@@ -49,17 +77,33 @@ export function reviewRequestMail(args: { to: string; reviewerName: string; requ
     to: args.to,
     subject: `Review requested: ${args.partName} ${args.variantLabel}`,
     text: `${lines.join('\n')}\n\nOpen the variant: ${args.url}`,
-    html: layout(`Review ${args.partName} ${args.variantLabel}`, lines, { label: 'Open the variant', url: args.url }, 'You receive this because you are a reviewer in this workspace.'),
+    html: layout(
+      `Review ${args.partName} ${args.variantLabel}`,
+      lines,
+      { label: 'Open the variant', url: args.url },
+      'You receive this because you are a reviewer in this workspace.',
+    ),
   };
 }
 
-const money = (cents: number, currency: string) => new Intl.NumberFormat('en-GB', { style: 'currency', currency: currency.toUpperCase() }).format(cents / 100);
+const money = (cents: number, currency: string) =>
+  new Intl.NumberFormat('en-GB', { style: 'currency', currency: currency.toUpperCase() }).format(cents / 100);
 
 /** Receipt for a paid invoice. */
-export function receiptMail(args: { to: string; workspaceName: string; amount: number; currency: string; number: string | null; url: string }): OutgoingMail {
-  const lines = [`We received ${money(args.amount, args.currency)} for the workspace "${args.workspaceName}"${args.number ? ` (invoice ${args.number})` : ''}. Thank you.`];
+export function receiptMail(args: {
+  to: string;
+  workspaceName: string;
+  amount: number;
+  currency: string;
+  number: string | null;
+  url: string;
+}): OutgoingMail {
+  const lines = [
+    `We received ${money(args.amount, args.currency)} for the workspace "${args.workspaceName}"${args.number ? ` (invoice ${args.number})` : ''}. Thank you.`,
+  ];
   return {
-    to: args.to, subject: `Receipt: ${args.workspaceName} — ${money(args.amount, args.currency)}`,
+    to: args.to,
+    subject: `Receipt: ${args.workspaceName} — ${money(args.amount, args.currency)}`,
     text: `${lines.join('\n')}\n\nInvoices: ${args.url}`,
     html: layout('Payment received', lines, { label: 'See invoices', url: args.url }, 'You receive this as an owner of the workspace.'),
   };
@@ -69,11 +113,19 @@ export function receiptMail(args: { to: string; workspaceName: string; amount: n
 export function paymentFailedMail(args: { to: string; workspaceName: string; readOnlyFrom: Date | null; url: string }): OutgoingMail {
   const lines = [
     `The latest payment for the workspace "${args.workspaceName}" failed.`,
-    args.readOnlyFrom ? `Please update the payment method before ${args.readOnlyFrom.toISOString().slice(0, 10)}; after that the workspace becomes read-only (exports keep working).` : 'Please update the payment method.',
+    args.readOnlyFrom
+      ? `Please update the payment method before ${args.readOnlyFrom.toISOString().slice(0, 10)}; after that the workspace becomes read-only (exports keep working).`
+      : 'Please update the payment method.',
   ];
   return {
-    to: args.to, subject: `Payment failed: ${args.workspaceName}`,
+    to: args.to,
+    subject: `Payment failed: ${args.workspaceName}`,
     text: `${lines.join('\n')}\n\nUpdate the payment method: ${args.url}`,
-    html: layout('Payment failed', lines, { label: 'Update the payment method', url: args.url }, 'You receive this as an owner of the workspace.'),
+    html: layout(
+      'Payment failed',
+      lines,
+      { label: 'Update the payment method', url: args.url },
+      'You receive this as an owner of the workspace.',
+    ),
   };
 }

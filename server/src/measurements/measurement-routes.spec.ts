@@ -13,20 +13,39 @@ beforeAll(async () => {
   t = await startTestApp();
   owner = await signUp(t.app);
   base = `/api/v1/workspaces/${owner.workspace.id}`;
-  const project = await request(t.app).post(`${base}/projects`).set(bearer(owner.accessToken)).send({ name: 'Rig', category: 'bat' }).expect(201);
-  const part = await request(t.app).post(`${base}/projects/${project.body.id}/parts`).set(bearer(owner.accessToken)).send({ name: 'Bar' }).expect(201);
+  const project = await request(t.app)
+    .post(`${base}/projects`)
+    .set(bearer(owner.accessToken))
+    .send({ name: 'Rig', category: 'bat' })
+    .expect(201);
+  const part = await request(t.app)
+    .post(`${base}/projects/${project.body.id}/parts`)
+    .set(bearer(owner.accessToken))
+    .send({ name: 'Bar' })
+    .expect(201);
   // A bar 0.8 m long, 0.03 m square, 700 kg/m³, grip at its end along z.
   const doc = {
     primitives: [{ id: 'bar', shape: 'box', size: [0.03, 0.03, 0.8], position: [0, 0, 0.4], density: 700 }],
-    spin: { axis: [1, 0, 0], rate: 10 }, grip: { point: [0, 0, 0], axis: [0, 0, 1], faceNormal: [0, 1, 0] },
+    spin: { axis: [1, 0, 0], rate: 10 },
+    grip: { point: [0, 0, 0], axis: [0, 0, 1], faceNormal: [0, 1, 0] },
   };
-  const v = await request(t.app).post(`${base}/parts/${part.body.id}/variants`).set(bearer(owner.accessToken)).send({ document: doc }).expect(201);
+  const v = await request(t.app)
+    .post(`${base}/parts/${part.body.id}/variants`)
+    .set(bearer(owner.accessToken))
+    .send({ document: doc })
+    .expect(201);
   report = v.body.report;
   url = `${base}/variants/${v.body.id}/measurements`;
-  const v2 = await request(t.app).post(`${base}/parts/${part.body.id}/variants`).set(bearer(owner.accessToken)).send({ document: doc }).expect(201);
+  const v2 = await request(t.app)
+    .post(`${base}/parts/${part.body.id}/variants`)
+    .set(bearer(owner.accessToken))
+    .send({ document: doc })
+    .expect(201);
   otherVariantUrl = `${base}/variants/${v2.body.id}/measurements`;
 });
-afterAll(async () => { await t.close(); });
+afterAll(async () => {
+  await t.close();
+});
 
 it('imports a CSV, converts units through mathjs and shows predicted against measured', async () => {
   const I1 = report.principal.moments[0];
@@ -79,22 +98,37 @@ it('lists the first 100 problems and counts the rest', async () => {
 });
 
 it('refuses a wrong header, an empty file and a missing file', async () => {
-  const header = (await request(t.app).post(url).set(bearer(owner.accessToken)).set('Content-Type', 'text/csv').send('a,b,c,d\n1,2,3,4\n').expect(400)).body.error;
+  const header = (
+    await request(t.app).post(url).set(bearer(owner.accessToken)).set('Content-Type', 'text/csv').send('a,b,c,d\n1,2,3,4\n').expect(400)
+  ).body.error;
   expect(header.message).toMatch(/line 1: the header must be axis,value,unit,method/);
   expect(header.problems).toEqual([{ line: 1, message: 'the header must be axis,value,unit,method (found a,b,c,d)' }]);
-  const empty = (await request(t.app).post(url).set(bearer(owner.accessToken)).set('Content-Type', 'text/csv').send('').expect(400)).body.error;
+  const empty = (await request(t.app).post(url).set(bearer(owner.accessToken)).set('Content-Type', 'text/csv').send('').expect(400)).body
+    .error;
   expect(empty.message).toMatch(/empty|required/);
-  const headerOnly = (await request(t.app).post(url).set(bearer(owner.accessToken)).set('Content-Type', 'text/csv').send('axis,value,unit,method\n').expect(400)).body.error;
+  const headerOnly = (
+    await request(t.app)
+      .post(url)
+      .set(bearer(owner.accessToken))
+      .set('Content-Type', 'text/csv')
+      .send('axis,value,unit,method\n')
+      .expect(400)
+  ).body.error;
   expect(headerOnly.problems).toEqual([{ line: null, message: 'the file has a header but no measurements' }]);
   const missing = (await request(t.app).post(url).set(bearer(owner.accessToken)).send({}).expect(400)).body.error;
   expect(missing).toEqual({ code: 'invalid_input', field: 'file', message: expect.stringMatching(/^file is required/) });
 });
 
 describe('removing measured rows', () => {
-  const csvOf = (tag: string, n: number) => ['axis,value,unit,method', ...Array.from({ length: n }, (_, i) => `${tag} ${i + 1},${0.001 * (i + 1)},kg·m²,trifilar pendulum`)].join('\n');
+  const csvOf = (tag: string, n: number) =>
+    ['axis,value,unit,method', ...Array.from({ length: n }, (_, i) => `${tag} ${i + 1},${0.001 * (i + 1)},kg·m²,trifilar pendulum`)].join(
+      '\n',
+    );
   const importCsv = async (into: string, tag: string, n: number) =>
-    (await request(t.app).post(into).set(bearer(owner.accessToken)).set('Content-Type', 'text/csv').send(csvOf(tag, n)).expect(201)).body as { id: string; axis: string; importId: string }[];
-  const axesAt = async (at: string) => ((await request(t.app).get(at).set(bearer(owner.accessToken)).expect(200)).body as { axis: string }[]).map((m) => m.axis);
+    (await request(t.app).post(into).set(bearer(owner.accessToken)).set('Content-Type', 'text/csv').send(csvOf(tag, n)).expect(201))
+      .body as { id: string; axis: string; importId: string }[];
+  const axesAt = async (at: string) =>
+    ((await request(t.app).get(at).set(bearer(owner.accessToken)).expect(200)).body as { axis: string }[]).map((m) => m.axis);
 
   it('gives the rows of one import one import id, and each import its own', async () => {
     const a = await importCsv(url, 'tag-a', 3);
@@ -102,7 +136,10 @@ describe('removing measured rows', () => {
     expect(new Set(a.map((m) => m.importId)).size).toBe(1);
     expect(new Set(b.map((m) => m.importId)).size).toBe(1);
     expect(a[0].importId).not.toBe(b[0].importId);
-    const audit = await AuditEvent.findOne({ where: { action: 'measurements.imported', workspaceId: owner.workspace.id }, order: [['createdAt', 'DESC']] });
+    const audit = await AuditEvent.findOne({
+      where: { action: 'measurements.imported', workspaceId: owner.workspace.id },
+      order: [['createdAt', 'DESC']],
+    });
     expect(audit!.details).toEqual({ rows: 2, importId: b[0].importId });
   });
 
@@ -113,9 +150,15 @@ describe('removing measured rows', () => {
     expect(res.body).toEqual({ removed: 1 });
     const after = await axesAt(url);
     expect(after).toEqual(before.filter((a) => a !== 'single 2'));
-    const audit = await AuditEvent.findOne({ where: { action: 'measurements.removed', targetId: url.split('/').at(-2) }, order: [['createdAt', 'DESC']] });
+    const audit = await AuditEvent.findOne({
+      where: { action: 'measurements.removed', targetId: url.split('/').at(-2) },
+      order: [['createdAt', 'DESC']],
+    });
     expect(audit!.actorId).toBe(owner.user.id);
-    expect(audit!.details).toMatchObject({ rows: 1, readings: [{ axis: 'single 2', enteredValue: 0.002, enteredUnit: 'kg·m²', method: 'trifilar pendulum' }] });
+    expect(audit!.details).toMatchObject({
+      rows: 1,
+      readings: [{ axis: 'single 2', enteredValue: 0.002, enteredUnit: 'kg·m²', method: 'trifilar pendulum' }],
+    });
     // Removing it again: gone.
     await request(t.app).delete(`${url}/${rows[1].id}`).set(bearer(owner.accessToken)).expect(404);
   });
@@ -133,7 +176,10 @@ describe('removing measured rows', () => {
     expect(await axesAt(otherVariantUrl)).toEqual(['elsewhere 1']);
     expect(await Measurement.count({ where: { importId: keep[0].importId } })).toBe(2);
     expect(await Measurement.count({ where: { importId: undo[0].importId } })).toBe(0);
-    const audit = await AuditEvent.findOne({ where: { action: 'measurements.removed', workspaceId: owner.workspace.id }, order: [['createdAt', 'DESC']] });
+    const audit = await AuditEvent.findOne({
+      where: { action: 'measurements.removed', workspaceId: owner.workspace.id },
+      order: [['createdAt', 'DESC']],
+    });
     expect(audit!.details).toMatchObject({ rows: 3, importId: undo[0].importId });
     expect((audit!.details as { readings: unknown[] }).readings).toHaveLength(3);
     // Nothing left of that import.
@@ -169,10 +215,22 @@ describe('removing measured rows', () => {
     const rows = await importCsv(url, 'tenant-a', 2);
     const b = await signUp(t.app);
     const bBase = `/api/v1/workspaces/${b.workspace.id}`;
-    const project = await request(t.app).post(`${bBase}/projects`).set(bearer(b.accessToken)).send({ name: 'B rig', category: 'bat' }).expect(201);
-    const part = await request(t.app).post(`${bBase}/projects/${project.body.id}/parts`).set(bearer(b.accessToken)).send({ name: 'B bar' }).expect(201);
+    const project = await request(t.app)
+      .post(`${bBase}/projects`)
+      .set(bearer(b.accessToken))
+      .send({ name: 'B rig', category: 'bat' })
+      .expect(201);
+    const part = await request(t.app)
+      .post(`${bBase}/projects/${project.body.id}/parts`)
+      .set(bearer(b.accessToken))
+      .send({ name: 'B bar' })
+      .expect(201);
     const doc = { primitives: [{ id: 'a', shape: 'sphere', radius: 0.05, density: 500 }], spin: { axis: [0, 0, 1], rate: 1 } };
-    const v = await request(t.app).post(`${bBase}/parts/${part.body.id}/variants`).set(bearer(b.accessToken)).send({ document: doc }).expect(201);
+    const v = await request(t.app)
+      .post(`${bBase}/parts/${part.body.id}/variants`)
+      .set(bearer(b.accessToken))
+      .send({ document: doc })
+      .expect(201);
     const bUrl = `${bBase}/variants/${v.body.id}/measurements`;
     // B's owner, with A's row and import ids under B's own variant.
     await request(t.app).delete(`${bUrl}/${rows[0].id}`).set(bearer(b.accessToken)).expect(404);

@@ -15,19 +15,30 @@ export function memberRoutes(ctx: AppContext, router: Router): void {
   const route = routeGroup(router, ctx.catalogue, '/workspaces/:workspaceId');
 
   route({
-    method: 'get', path: '/members', summary: 'List the members of the workspace.',
+    method: 'get',
+    path: '/members',
+    summary: 'List the members of the workspace.',
     access: { kind: 'workspace', permission: 'workspace.read' },
     success: { status: 200, description: 'Members, oldest first.', schema: z.array(memberSchema) },
     handler: async (_input, req) => {
       const { workspaceId } = membershipOf(req);
-      const rows = await Membership.findAll({ where: { workspaceId }, include: [{ model: User, as: 'user', required: true }], order: [['createdAt', 'ASC']] });
+      const rows = await Membership.findAll({
+        where: { workspaceId },
+        include: [{ model: User, as: 'user', required: true }],
+        order: [['createdAt', 'ASC']],
+      });
       return rows.map((m) => m.toMemberDto());
     },
   });
 
   route({
-    method: 'patch', path: '/members/:memberId', summary: 'Change a member’s role.',
-    access: { kind: 'workspace', permission: 'members.manage' }, params: memberParams, body: changeRoleBodySchema, errors: [409],
+    method: 'patch',
+    path: '/members/:memberId',
+    summary: 'Change a member’s role.',
+    access: { kind: 'workspace', permission: 'members.manage' },
+    params: memberParams,
+    body: changeRoleBodySchema,
+    errors: [409],
     success: { status: 200, description: 'The member with the new role.', schema: memberSchema },
     handler: async ({ params, body, auth }, req) => {
       const actor = membershipOf(req);
@@ -40,18 +51,30 @@ export function memberRoutes(ctx: AppContext, router: Router): void {
         if (member.role === 'owner') await assertNotLastOwner(actor.workspaceId, transaction, 'demoted');
         const before = member.role;
         await member.update({ role: body.role }, { transaction });
-        await recordAudit({
-          workspaceId: actor.workspaceId, actorId: auth!.user.id, action: 'member.role_changed', targetType: 'member',
-          targetId: member.id, targetLabel: member.user!.email, details: { from: before, to: body.role },
-        }, transaction);
+        await recordAudit(
+          {
+            workspaceId: actor.workspaceId,
+            actorId: auth!.user.id,
+            action: 'member.role_changed',
+            targetType: 'member',
+            targetId: member.id,
+            targetLabel: member.user!.email,
+            details: { from: before, to: body.role },
+          },
+          transaction,
+        );
         return member.toMemberDto();
       });
     },
   });
 
   route({
-    method: 'delete', path: '/members/:memberId', summary: 'Remove a member from the workspace.',
-    access: { kind: 'workspace', permission: 'members.manage' }, params: memberParams, errors: [409],
+    method: 'delete',
+    path: '/members/:memberId',
+    summary: 'Remove a member from the workspace.',
+    access: { kind: 'workspace', permission: 'members.manage' },
+    params: memberParams,
+    errors: [409],
     success: { status: 204, description: 'Removed.' },
     handler: async ({ params, auth }, req) => {
       const actor = membershipOf(req);
@@ -60,10 +83,18 @@ export function memberRoutes(ctx: AppContext, router: Router): void {
         if (member.role === 'owner' && actor.role !== 'owner') throw AppError.forbidden('Only an owner can remove an owner.');
         if (member.role === 'owner') await assertNotLastOwner(actor.workspaceId, transaction, 'removed');
         await member.destroy({ transaction });
-        await recordAudit({
-          workspaceId: actor.workspaceId, actorId: auth!.user.id, action: 'member.removed', targetType: 'member',
-          targetId: member.id, targetLabel: member.user!.email, details: { role: member.role, name: member.user!.name },
-        }, transaction);
+        await recordAudit(
+          {
+            workspaceId: actor.workspaceId,
+            actorId: auth!.user.id,
+            action: 'member.removed',
+            targetType: 'member',
+            targetId: member.id,
+            targetLabel: member.user!.email,
+            details: { role: member.role, name: member.user!.name },
+          },
+          transaction,
+        );
       });
       return undefined;
     },

@@ -14,14 +14,22 @@ beforeAll(async () => {
   owner = await signUp(t.app);
   base = `/api/v1/workspaces/${owner.workspace.id}`;
 });
-afterAll(async () => { await t.close(); });
+afterAll(async () => {
+  await t.close();
+});
 
-const upload = (file: Buffer, name = 'cube.stl') => request(t.app).post(`${base}/meshes`).set(bearer(owner.accessToken)).attach('file', file, name);
+const upload = (file: Buffer, name = 'cube.stl') =>
+  request(t.app).post(`${base}/meshes`).set(bearer(owner.accessToken)).attach('file', file, name);
 
 describe('STL uploads', () => {
   it('stores a good binary and a good ASCII cube with sha256 and triangle count', async () => {
     const bin = await upload(binaryStl(cubeTriangles())).expect(201);
-    expect(bin.body).toMatchObject({ format: 'binary', triangleCount: 12, byteSize: 84 + 50 * 12, sha256: expect.stringMatching(/^[0-9a-f]{64}$/) });
+    expect(bin.body).toMatchObject({
+      format: 'binary',
+      triangleCount: 12,
+      byteSize: 84 + 50 * 12,
+      sha256: expect.stringMatching(/^[0-9a-f]{64}$/),
+    });
     const ascii = await upload(asciiStl(cubeTriangles()), 'cube-ascii.stl').expect(201);
     expect(ascii.body).toMatchObject({ format: 'ascii', triangleCount: 12, name: 'cube-ascii.stl' });
     const list = await request(t.app).get(`${base}/meshes`).set(bearer(owner.accessToken)).expect(200);
@@ -29,7 +37,7 @@ describe('STL uploads', () => {
   });
 
   it('fixes and reports an inside-out cube', async () => {
-    const flipped = cubeTriangles().map(([a, b, c]) => [a, c, b] as typeof a[]);
+    const flipped = cubeTriangles().map(([a, b, c]) => [a, c, b] as (typeof a)[]);
     const res = await upload(binaryStl(flipped as never)).expect(201);
     expect(res.body.report.fixed.join(' ')).toMatch(/inside.out|flipped/i);
   });
@@ -38,9 +46,23 @@ describe('STL uploads', () => {
     ['truncated binary', () => binaryStl(cubeTriangles()).subarray(0, 84 + 50 * 12 - 7), 422, /header announces 12 triangles/],
     ['wrong header count', () => binaryStl(cubeTriangles(), 13), 422, /announces 13 triangles/],
     ['open mesh (one face missing)', () => binaryStl(cubeTriangles().slice(0, 10)), 422, /open|boundary|edge/i],
-    ['NaN coordinate', () => { const tris = cubeTriangles(); tris[3][1][0] = Number.NaN; return binaryStl(tris); }, 422, /finite|NaN/i],
+    [
+      'NaN coordinate',
+      () => {
+        const tris = cubeTriangles();
+        tris[3][1][0] = Number.NaN;
+        return binaryStl(tris);
+      },
+      422,
+      /finite|NaN/i,
+    ],
     ['zero triangles', () => binaryStl([]), 422, /no triangles/],
-    ['two cubes passing through each other', () => binaryStl([...cubeTriangles(), ...cubeTriangles().map((t) => t.map(([x, y, z]) => [x + 0.5, y + 0.3, z + 0.2]) as typeof t)]), 422, /crosses itself \(facets \d+ and \d+/],
+    [
+      'two cubes passing through each other',
+      () => binaryStl([...cubeTriangles(), ...cubeTriangles().map((t) => t.map(([x, y, z]) => [x + 0.5, y + 0.3, z + 0.2]) as typeof t)]),
+      422,
+      /crosses itself \(facets \d+ and \d+/,
+    ],
     ['not an STL at all', () => Buffer.from('hello, this is a text file'), 422, /neither an ASCII STL/],
     ['over the size limit', () => Buffer.alloc(25000, 1), 413, /too large/],
   ];
@@ -59,10 +81,25 @@ describe('STL uploads', () => {
 
   it('a stored mesh is usable by id in a variant: the cube of side 0.1 m at 1000 kg/m³ weighs 1 kg', async () => {
     const mesh = await upload(binaryStl(cubeTriangles(100)), 'cube-mm.stl').expect(201);
-    const project = await request(t.app).post(`${base}/projects`).set(bearer(owner.accessToken)).send({ name: 'Mesh', category: 'other' }).expect(201);
-    const part = await request(t.app).post(`${base}/projects/${project.body.id}/parts`).set(bearer(owner.accessToken)).send({ name: 'Block' }).expect(201);
-    const doc = { primitives: [{ id: 'block', shape: 'mesh', meshId: mesh.body.id, scale: 0.001, density: 1000 }], spin: { axis: [0, 0, 1], rate: 5 } };
-    const v = await request(t.app).post(`${base}/parts/${part.body.id}/variants`).set(bearer(owner.accessToken)).send({ document: doc }).expect(201);
+    const project = await request(t.app)
+      .post(`${base}/projects`)
+      .set(bearer(owner.accessToken))
+      .send({ name: 'Mesh', category: 'other' })
+      .expect(201);
+    const part = await request(t.app)
+      .post(`${base}/projects/${project.body.id}/parts`)
+      .set(bearer(owner.accessToken))
+      .send({ name: 'Block' })
+      .expect(201);
+    const doc = {
+      primitives: [{ id: 'block', shape: 'mesh', meshId: mesh.body.id, scale: 0.001, density: 1000 }],
+      spin: { axis: [0, 0, 1], rate: 5 },
+    };
+    const v = await request(t.app)
+      .post(`${base}/parts/${part.body.id}/variants`)
+      .set(bearer(owner.accessToken))
+      .send({ document: doc })
+      .expect(201);
     // Cube of side a: m = ρa³, I = m·a²/6 about its centre (Machinery's Handbook, rectangular prism).
     expect(v.body.report.mass).toBeCloseTo(1, 9);
     expect(v.body.report.principal.moments[0]).toBeCloseTo((1 * 0.1 ** 2) / 6, 9);
@@ -70,7 +107,12 @@ describe('STL uploads', () => {
 
     // Its PDF draws the mesh: the side view (part z up, looking along x) is the cube's 0.1 m square.
     const run = jest.spyOn(t.ctx.compute, 'run');
-    const pdf = await request(t.app).get(`${base}/variants/${v.body.id}/export.pdf`).set(bearer(owner.accessToken)).buffer(true).parse(asBytes).expect(200);
+    const pdf = await request(t.app)
+      .get(`${base}/variants/${v.body.id}/export.pdf`)
+      .set(bearer(owner.accessToken))
+      .buffer(true)
+      .parse(asBytes)
+      .expect(200);
     expect((pdf.body as Buffer).subarray(0, 5).toString()).toBe('%PDF-');
     const drawing = (await run.mock.results.find((r) => r.type === 'return')!.value) as PartDrawing;
     run.mockRestore();
@@ -104,19 +146,33 @@ describe('reading an uploaded mesh back for drawing', () => {
   });
 
   it('answers the stored STL bytes unchanged as model/stl, with its SHA-256 as ETag', async () => {
-    const res = await request(t.app).get(`${base}/meshes/${meshId}/geometry`).set(bearer(owner.accessToken)).buffer(true).parse(asBytes).expect(200);
+    const res = await request(t.app)
+      .get(`${base}/meshes/${meshId}/geometry`)
+      .set(bearer(owner.accessToken))
+      .buffer(true)
+      .parse(asBytes)
+      .expect(200);
     expect(res.headers['content-type']).toMatch(/^model\/stl/);
     expect(Buffer.compare(res.body as Buffer, cube)).toBe(0);
     const meta = await request(t.app).get(`${base}/meshes/${meshId}`).set(bearer(owner.accessToken)).expect(200);
     expect(res.headers['etag']).toBe(`"${meta.body.sha256}"`);
     // A second request with the ETag is answered 304 without the body (RFC 9110 §13.1.2, If-None-Match).
-    await request(t.app).get(`${base}/meshes/${meshId}/geometry`).set(bearer(owner.accessToken)).set('If-None-Match', res.headers['etag']).expect(304);
+    await request(t.app)
+      .get(`${base}/meshes/${meshId}/geometry`)
+      .set(bearer(owner.accessToken))
+      .set('If-None-Match', res.headers['etag'])
+      .expect(304);
   });
 
   it('answers an ASCII upload as its ASCII text', async () => {
     const ascii = asciiStl(cubeTriangles());
     const id = (await upload(ascii, 'ascii.stl').expect(201)).body.id;
-    const res = await request(t.app).get(`${base}/meshes/${id}/geometry`).set(bearer(owner.accessToken)).buffer(true).parse(asBytes).expect(200);
+    const res = await request(t.app)
+      .get(`${base}/meshes/${id}/geometry`)
+      .set(bearer(owner.accessToken))
+      .buffer(true)
+      .parse(asBytes)
+      .expect(200);
     expect((res.body as Buffer).toString('ascii')).toBe(ascii.toString('ascii'));
   });
 
@@ -162,12 +218,26 @@ describe('reading an uploaded mesh back for drawing', () => {
 
 describe('deleting an uploaded mesh', () => {
   const token = () => bearer(owner.accessToken);
-  const cubeDoc = (meshId: string) => ({ primitives: [{ id: 'block', shape: 'mesh', meshId, scale: 0.001, density: 1000 }], spin: { axis: [0, 0, 1], rate: 5 } });
+  const cubeDoc = (meshId: string) => ({
+    primitives: [{ id: 'block', shape: 'mesh', meshId, scale: 0.001, density: 1000 }],
+    spin: { axis: [0, 0, 1], rate: 5 },
+  });
   const newPart = async (name: string, draft?: object) => {
-    const project = await request(t.app).post(`${base}/projects`).set(token()).send({ name: `${name} project`, category: 'other' }).expect(201);
-    return (await request(t.app).post(`${base}/projects/${project.body.id}/parts`).set(token()).send({ name, ...(draft ? { draft } : {}) }).expect(201)).body as { id: string; projectId: string; draftVersion: number };
+    const project = await request(t.app)
+      .post(`${base}/projects`)
+      .set(token())
+      .send({ name: `${name} project`, category: 'other' })
+      .expect(201);
+    return (
+      await request(t.app)
+        .post(`${base}/projects/${project.body.id}/parts`)
+        .set(token())
+        .send({ name, ...(draft ? { draft } : {}) })
+        .expect(201)
+    ).body as { id: string; projectId: string; draftVersion: number };
   };
-  const deletions = (meshId: string) => AuditEvent.findAll({ where: { workspaceId: owner.workspace.id, action: 'mesh.deleted', targetId: meshId } });
+  const deletions = (meshId: string) =>
+    AuditEvent.findAll({ where: { workspaceId: owner.workspace.id, action: 'mesh.deleted', targetId: meshId } });
 
   it('deletes a mesh nothing uses, and the audit trail names it, its deleter and its checksum', async () => {
     const mesh = (await upload(binaryStl(cubeTriangles(30)), 'spare-block.stl').expect(201)).body;
@@ -177,7 +247,12 @@ describe('deleting an uploaded mesh', () => {
     await request(t.app).get(`${base}/meshes/${mesh.id}`).set(token()).expect(404);
     const events = await deletions(mesh.id);
     expect(events).toHaveLength(1);
-    expect(events[0]).toMatchObject({ actorId: owner.user.id, targetType: 'mesh', targetLabel: 'spare-block.stl', details: { triangles: 12, sha256: mesh.sha256 } });
+    expect(events[0]).toMatchObject({
+      actorId: owner.user.id,
+      targetType: 'mesh',
+      targetLabel: 'spare-block.stl',
+      details: { triangles: 12, sha256: mesh.sha256 },
+    });
     // Deleting it again: gone, and no second entry.
     await request(t.app).delete(`${base}/meshes/${mesh.id}`).set(token()).expect(404);
     expect(await deletions(mesh.id)).toHaveLength(1);
@@ -187,7 +262,9 @@ describe('deleting an uploaded mesh', () => {
     const mesh = (await upload(binaryStl(cubeTriangles(30)), 'grip-insert.stl').expect(201)).body;
     const part = await newPart('Grip insert trial', cubeDoc(mesh.id));
     const usage = await request(t.app).get(`${base}/meshes/${mesh.id}/usage`).set(token()).expect(200);
-    expect(usage.body).toEqual({ parts: [{ partId: part.id, projectId: part.projectId, partName: 'Grip insert trial', inDraft: true, variantNumbers: [] }] });
+    expect(usage.body).toEqual({
+      parts: [{ partId: part.id, projectId: part.projectId, partName: 'Grip insert trial', inDraft: true, variantNumbers: [] }],
+    });
     const refused = await request(t.app).delete(`${base}/meshes/${mesh.id}`).set(token()).expect(409);
     expect(refused.body.error).toMatchObject({ code: 'mesh_in_use', field: 'meshId' });
     expect(refused.body.error.message).toContain('“grip-insert.stl” is still used by Grip insert trial (its draft)');
@@ -195,7 +272,11 @@ describe('deleting an uploaded mesh', () => {
     expect(await deletions(mesh.id)).toHaveLength(0);
     // The draft swaps the mesh for a sphere: nothing uses the mesh any more.
     const sphere = { primitives: [{ id: 'ball', shape: 'sphere', radius: 0.02, density: 1000 }], spin: { axis: [0, 0, 1], rate: 5 } };
-    await request(t.app).patch(`${base}/parts/${part.id}`).set(token()).send({ draftVersion: part.draftVersion, draft: sphere }).expect(200);
+    await request(t.app)
+      .patch(`${base}/parts/${part.id}`)
+      .set(token())
+      .send({ draftVersion: part.draftVersion, draft: sphere })
+      .expect(200);
     await request(t.app).delete(`${base}/meshes/${mesh.id}`).set(token()).expect(204);
     expect(await deletions(mesh.id)).toHaveLength(1);
   });
@@ -203,8 +284,16 @@ describe('deleting an uploaded mesh', () => {
   it('keeps a mesh a saved variant was computed from, even when no draft uses it, until the part is deleted', async () => {
     const mesh = (await upload(binaryStl(cubeTriangles(30)), 'head-core.stl').expect(201)).body;
     const part = await newPart('Head core');
-    await request(t.app).post(`${base}/parts/${part.id}/variants`).set(token()).send({ document: cubeDoc(mesh.id) }).expect(201);
-    await request(t.app).post(`${base}/parts/${part.id}/variants`).set(token()).send({ document: cubeDoc(mesh.id) }).expect(201);
+    await request(t.app)
+      .post(`${base}/parts/${part.id}/variants`)
+      .set(token())
+      .send({ document: cubeDoc(mesh.id) })
+      .expect(201);
+    await request(t.app)
+      .post(`${base}/parts/${part.id}/variants`)
+      .set(token())
+      .send({ document: cubeDoc(mesh.id) })
+      .expect(201);
     const usage = await request(t.app).get(`${base}/meshes/${mesh.id}/usage`).set(token()).expect(200);
     expect(usage.body.parts).toEqual([expect.objectContaining({ partId: part.id, inDraft: false, variantNumbers: [1, 2] })]);
     const refused = await request(t.app).delete(`${base}/meshes/${mesh.id}`).set(token()).expect(409);
@@ -217,8 +306,18 @@ describe('deleting an uploaded mesh', () => {
     const mesh = (await upload(binaryStl(cubeTriangles(30)), 'shared-name.stl').expect(201)).body;
     const stranger = await signUp(t.app);
     // Another workspace's draft naming our mesh id (it cannot load it, but it must not hold it either).
-    const project = await Project.create({ workspaceId: stranger.workspace.id, name: 'Elsewhere', category: 'other', createdById: stranger.user.id });
-    await Part.create({ workspaceId: stranger.workspace.id, projectId: project.id, name: 'Elsewhere part', draft: cubeDoc(mesh.id) as Part['draft'] });
+    const project = await Project.create({
+      workspaceId: stranger.workspace.id,
+      name: 'Elsewhere',
+      category: 'other',
+      createdById: stranger.user.id,
+    });
+    await Part.create({
+      workspaceId: stranger.workspace.id,
+      projectId: project.id,
+      name: 'Elsewhere part',
+      draft: cubeDoc(mesh.id) as Part['draft'],
+    });
     expect((await request(t.app).get(`${base}/meshes/${mesh.id}/usage`).set(token()).expect(200)).body).toEqual({ parts: [] });
     const theirs = `/api/v1/workspaces/${stranger.workspace.id}`;
     expect((await request(t.app).delete(`${theirs}/meshes/${mesh.id}`).set(bearer(stranger.accessToken))).status).toBe(404);
@@ -228,9 +327,17 @@ describe('deleting an uploaded mesh', () => {
   });
 
   it('names at most three parts in the refusal and counts the rest', () => {
-    const user = (n: number) => ({ partId: `p${n}`, projectId: 'x', partName: `Part ${n}`, inDraft: n % 2 === 0, variantNumbers: n === 1 ? [3] : [] });
+    const user = (n: number) => ({
+      partId: `p${n}`,
+      projectId: 'x',
+      partName: `Part ${n}`,
+      inDraft: n % 2 === 0,
+      variantNumbers: n === 1 ? [3] : [],
+    });
     const message = meshInUseMessage('block.stl', { parts: [1, 2, 4, 6].map(user) });
-    expect(message).toBe('The mesh “block.stl” is still used by Part 1 (saved variant v3); Part 2 (its draft); Part 4 (its draft) and 1 more part, so it cannot be deleted. '
-      + 'Remove it from those drafts, or delete those parts; a saved variant keeps the mesh it was computed from.');
+    expect(message).toBe(
+      'The mesh “block.stl” is still used by Part 1 (saved variant v3); Part 2 (its draft); Part 4 (its draft) and 1 more part, so it cannot be deleted. ' +
+        'Remove it from those drafts, or delete those parts; a saved variant keeps the mesh it was computed from.',
+    );
   });
 });

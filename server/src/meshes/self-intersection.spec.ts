@@ -31,7 +31,11 @@ describe('a surface that crosses itself', () => {
     const [i, j] = pair!;
     expect(i).toBeLessThan(12); // a box has 12 triangles: the first is the first box's,
     expect(j).toBeGreaterThanOrEqual(12); // the second the other's
-    expect(selfIntersectionProblem(pair!)).toMatchObject({ code: 'self_intersecting', firstTriangle: i, message: expect.stringContaining(`facets ${i + 1} and ${j + 1}`) });
+    expect(selfIntersectionProblem(pair!)).toMatchObject({
+      code: 'self_intersecting',
+      firstTriangle: i,
+      message: expect.stringContaining(`facets ${i + 1} and ${j + 1}`),
+    });
   });
 
   it('names the crossing facets by their place in the file, whatever order the tree keeps them in', async () => {

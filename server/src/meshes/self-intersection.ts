@@ -41,11 +41,21 @@ export async function firstSelfIntersection(vertices: Float64Array, triangles: U
 function trianglePlanes(v: Float64Array, t: Uint32Array): Float64Array {
   const planes = new Float64Array((t.length / 3) * 4);
   for (let k = 0, p = 0; k < t.length; k += 3, p += 4) {
-    const a = 3 * t[k], b = 3 * t[k + 1], c = 3 * t[k + 2];
-    const ux = v[b] - v[a], uy = v[b + 1] - v[a + 1], uz = v[b + 2] - v[a + 2];
-    const wx = v[c] - v[a], wy = v[c + 1] - v[a + 1], wz = v[c + 2] - v[a + 2];
-    const nx = uy * wz - uz * wy, ny = uz * wx - ux * wz, nz = ux * wy - uy * wx;
-    planes[p] = nx; planes[p + 1] = ny; planes[p + 2] = nz;
+    const a = 3 * t[k],
+      b = 3 * t[k + 1],
+      c = 3 * t[k + 2];
+    const ux = v[b] - v[a],
+      uy = v[b + 1] - v[a + 1],
+      uz = v[b + 2] - v[a + 2];
+    const wx = v[c] - v[a],
+      wy = v[c + 1] - v[a + 1],
+      wz = v[c + 2] - v[a + 2];
+    const nx = uy * wz - uz * wy,
+      ny = uz * wx - ux * wz,
+      nz = ux * wy - uy * wx;
+    planes[p] = nx;
+    planes[p + 1] = ny;
+    planes[p + 2] = nz;
     planes[p + 3] = nx * v[a] + ny * v[a + 1] + nz * v[a + 2];
   }
   return planes;
@@ -53,8 +63,12 @@ function trianglePlanes(v: Float64Array, t: Uint32Array): Float64Array {
 
 /** Whether all three corners of triangle `j` lie strictly on one side of triangle `i`'s plane. */
 function oneSide(planes: Float64Array, i: number, v: Float64Array, t: Uint32Array, j: number): boolean {
-  const nx = planes[4 * i], ny = planes[4 * i + 1], nz = planes[4 * i + 2], d = planes[4 * i + 3];
-  let above = 0, below = 0;
+  const nx = planes[4 * i],
+    ny = planes[4 * i + 1],
+    nz = planes[4 * i + 2],
+    d = planes[4 * i + 3];
+  let above = 0,
+    below = 0;
   for (let k = 3 * j; k < 3 * j + 3; k++) {
     const q = 3 * t[k];
     const s = nx * v[q] + ny * v[q + 1] + nz * v[q + 2] - d;
@@ -73,7 +87,9 @@ function shareVertex(t: Uint32Array, i: number, j: number): boolean {
 
 /** Where the sorted triangle `i` stands in the file's order (its three vertex numbers, in turn). */
 function fileNumber(original: Uint32Array, sorted: Uint32Array, i: number): number {
-  const a = sorted[3 * i], b = sorted[3 * i + 1], c = sorted[3 * i + 2];
+  const a = sorted[3 * i],
+    b = sorted[3 * i + 1],
+    c = sorted[3 * i + 2];
   for (let k = 0; k < original.length; k += 3) if (original[k] === a && original[k + 1] === b && original[k + 2] === c) return k / 3;
   return i;
 }

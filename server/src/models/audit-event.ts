@@ -1,4 +1,13 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
 import type { AuditEvent as AuditEventDto } from '@tumblewise/shared';
 import type { User } from './user';
 import type { Workspace } from './workspace';
@@ -17,15 +26,18 @@ export class AuditEvent extends Model<InferAttributes<AuditEvent>, InferCreation
   declare actor?: NonAttribute<User | null>;
 
   static initModel(sequelize: Sequelize): void {
-    AuditEvent.init({
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      action: { type: DataTypes.STRING(80), allowNull: false },
-      targetType: { type: DataTypes.STRING(40), allowNull: false },
-      targetId: { type: DataTypes.STRING(64), allowNull: true },
-      targetLabel: { type: DataTypes.STRING(300), allowNull: true },
-      details: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
-      createdAt: DataTypes.DATE,
-    }, { sequelize, tableName: 'audit_events', updatedAt: false });
+    AuditEvent.init(
+      {
+        id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+        action: { type: DataTypes.STRING(80), allowNull: false },
+        targetType: { type: DataTypes.STRING(40), allowNull: false },
+        targetId: { type: DataTypes.STRING(64), allowNull: true },
+        targetLabel: { type: DataTypes.STRING(300), allowNull: true },
+        details: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
+        createdAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'audit_events', updatedAt: false },
+    );
   }
 
   toDto(): AuditEventDto {

@@ -10,13 +10,16 @@ export class BillingEvent extends Model<InferAttributes<BillingEvent>, InferCrea
   declare receivedAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize): void {
-    BillingEvent.init({
-      id: { type: DataTypes.STRING(80), primaryKey: true },
-      type: { type: DataTypes.STRING(80), allowNull: false },
-      workspaceId: { type: DataTypes.UUID, allowNull: true },
-      providerCreatedAt: { type: DataTypes.DATE, allowNull: false },
-      applied: { type: DataTypes.BOOLEAN, allowNull: false },
-      receivedAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
-    }, { sequelize, tableName: 'billing_events', timestamps: false });
+    BillingEvent.init(
+      {
+        id: { type: DataTypes.STRING(80), primaryKey: true },
+        type: { type: DataTypes.STRING(80), allowNull: false },
+        workspaceId: { type: DataTypes.UUID, allowNull: true },
+        providerCreatedAt: { type: DataTypes.DATE, allowNull: false },
+        applied: { type: DataTypes.BOOLEAN, allowNull: false },
+        receivedAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
+      },
+      { sequelize, tableName: 'billing_events', timestamps: false },
+    );
   }
 }

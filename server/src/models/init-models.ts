@@ -19,8 +19,25 @@ import { Workspace } from './workspace';
 
 /** Initialises every model on the instance and wires the associations. */
 export function initModels(sequelize: Sequelize): void {
-  for (const model of [User, Workspace, Membership, SignInSession, RefreshToken, PasswordReset, Invitation, AuditEvent, Project,
-    Material, Part, Variant, Mesh, ReviewEntry, Measurement, ScatterStudy, BillingEvent]) {
+  for (const model of [
+    User,
+    Workspace,
+    Membership,
+    SignInSession,
+    RefreshToken,
+    PasswordReset,
+    Invitation,
+    AuditEvent,
+    Project,
+    Material,
+    Part,
+    Variant,
+    Mesh,
+    ReviewEntry,
+    Measurement,
+    ScatterStudy,
+    BillingEvent,
+  ]) {
     model.initModel(sequelize);
   }
   Workspace.hasMany(Membership, { foreignKey: 'workspaceId' });
@@ -49,4 +66,22 @@ export function initModels(sequelize: Sequelize): void {
   ScatterStudy.belongsTo(Variant, { foreignKey: 'variantId' });
 }
 
-export { AuditEvent, BillingEvent, Invitation, Material, Measurement, Membership, Mesh, Part, PasswordReset, Project, RefreshToken, ReviewEntry, ScatterStudy, SignInSession, User, Variant, Workspace };
+export {
+  AuditEvent,
+  BillingEvent,
+  Invitation,
+  Material,
+  Measurement,
+  Membership,
+  Mesh,
+  Part,
+  PasswordReset,
+  Project,
+  RefreshToken,
+  ReviewEntry,
+  ScatterStudy,
+  SignInSession,
+  User,
+  Variant,
+  Workspace,
+};

@@ -1,4 +1,13 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
 import type { Invitation as InvitationDto, Role } from '@tumblewise/shared';
 import type { User } from './user';
 import type { Workspace } from './workspace';
@@ -24,20 +33,23 @@ export class Invitation extends Model<InferAttributes<Invitation>, InferCreation
   declare workspace?: NonAttribute<Workspace>;
 
   static initModel(sequelize: Sequelize): void {
-    Invitation.init({
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      email: { type: DataTypes.STRING(254), allowNull: false },
-      role: { type: DataTypes.STRING(20), allowNull: false },
-      tokenHash: { type: DataTypes.STRING(64), allowNull: false, unique: true },
-      status: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'pending' },
-      expiresAt: { type: DataTypes.DATE, allowNull: false },
-      delivery: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'not_sent' },
-      deliveryError: { type: DataTypes.STRING(500), allowNull: true },
-      lastSentAt: { type: DataTypes.DATE, allowNull: true },
-      acceptedAt: { type: DataTypes.DATE, allowNull: true },
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
-    }, { sequelize, tableName: 'invitations' });
+    Invitation.init(
+      {
+        id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+        email: { type: DataTypes.STRING(254), allowNull: false },
+        role: { type: DataTypes.STRING(20), allowNull: false },
+        tokenHash: { type: DataTypes.STRING(64), allowNull: false, unique: true },
+        status: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'pending' },
+        expiresAt: { type: DataTypes.DATE, allowNull: false },
+        delivery: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'not_sent' },
+        deliveryError: { type: DataTypes.STRING(500), allowNull: true },
+        lastSentAt: { type: DataTypes.DATE, allowNull: true },
+        acceptedAt: { type: DataTypes.DATE, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'invitations' },
+    );
   }
 
   /** Pending but past its expiry counts as expired. */

@@ -16,18 +16,21 @@ export class Measurement extends Model<InferAttributes<Measurement>, InferCreati
   declare createdAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize): void {
-    Measurement.init({
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      workspaceId: { type: DataTypes.UUID, allowNull: false },
-      variantId: { type: DataTypes.UUID, allowNull: false },
-      axis: { type: DataTypes.STRING(120), allowNull: false },
-      value: { type: DataTypes.DOUBLE, allowNull: false },
-      enteredValue: { type: DataTypes.DOUBLE, allowNull: false },
-      enteredUnit: { type: DataTypes.STRING(20), allowNull: false },
-      method: { type: DataTypes.STRING(200), allowNull: false },
-      createdById: { type: DataTypes.UUID, allowNull: true },
-      importId: { type: DataTypes.UUID, allowNull: true },
-      createdAt: DataTypes.DATE,
-    }, { sequelize, tableName: 'measurements', updatedAt: false });
+    Measurement.init(
+      {
+        id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+        workspaceId: { type: DataTypes.UUID, allowNull: false },
+        variantId: { type: DataTypes.UUID, allowNull: false },
+        axis: { type: DataTypes.STRING(120), allowNull: false },
+        value: { type: DataTypes.DOUBLE, allowNull: false },
+        enteredValue: { type: DataTypes.DOUBLE, allowNull: false },
+        enteredUnit: { type: DataTypes.STRING(20), allowNull: false },
+        method: { type: DataTypes.STRING(200), allowNull: false },
+        createdById: { type: DataTypes.UUID, allowNull: true },
+        importId: { type: DataTypes.UUID, allowNull: true },
+        createdAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'measurements', updatedAt: false },
+    );
   }
 }

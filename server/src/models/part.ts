@@ -12,15 +12,18 @@ export class Part extends Model<InferAttributes<Part>, InferCreationAttributes<P
   declare updatedAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize): void {
-    Part.init({
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      workspaceId: { type: DataTypes.UUID, allowNull: false },
-      projectId: { type: DataTypes.UUID, allowNull: false },
-      name: { type: DataTypes.STRING(120), allowNull: false },
-      draft: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
-      draftVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
-    }, { sequelize, tableName: 'parts' });
+    Part.init(
+      {
+        id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+        workspaceId: { type: DataTypes.UUID, allowNull: false },
+        projectId: { type: DataTypes.UUID, allowNull: false },
+        name: { type: DataTypes.STRING(120), allowNull: false },
+        draft: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
+        draftVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'parts' },
+    );
   }
 }

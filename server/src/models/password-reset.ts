@@ -1,4 +1,12 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import type { User } from './user';
 
 /** A single-use, expiring password-reset token (SHA-256 stored). */
@@ -12,13 +20,16 @@ export class PasswordReset extends Model<InferAttributes<PasswordReset>, InferCr
   declare updatedAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize): void {
-    PasswordReset.init({
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      tokenHash: { type: DataTypes.STRING(64), allowNull: false, unique: true },
-      expiresAt: { type: DataTypes.DATE, allowNull: false },
-      usedAt: { type: DataTypes.DATE, allowNull: true },
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
-    }, { sequelize, tableName: 'password_resets' });
+    PasswordReset.init(
+      {
+        id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+        tokenHash: { type: DataTypes.STRING(64), allowNull: false, unique: true },
+        expiresAt: { type: DataTypes.DATE, allowNull: false },
+        usedAt: { type: DataTypes.DATE, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'password_resets' },
+    );
   }
 }

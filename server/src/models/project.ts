@@ -1,4 +1,12 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import type { GearCategory, Project as ProjectDto } from '@tumblewise/shared';
 import type { User } from './user';
 import type { Workspace } from './workspace';
@@ -16,21 +24,29 @@ export class Project extends Model<InferAttributes<Project>, InferCreationAttrib
   declare updatedAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize): void {
-    Project.init({
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      name: { type: DataTypes.STRING(120), allowNull: false },
-      category: { type: DataTypes.STRING(40), allowNull: false },
-      notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
-      archived: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
-    }, { sequelize, tableName: 'projects' });
+    Project.init(
+      {
+        id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+        name: { type: DataTypes.STRING(120), allowNull: false },
+        category: { type: DataTypes.STRING(40), allowNull: false },
+        notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        archived: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'projects' },
+    );
   }
 
   toDto(): ProjectDto {
     return {
-      id: this.id, name: this.name, category: this.category, notes: this.notes, archived: this.archived,
-      createdAt: this.createdAt.toISOString(), updatedAt: this.updatedAt.toISOString(),
+      id: this.id,
+      name: this.name,
+      category: this.category,
+      notes: this.notes,
+      archived: this.archived,
+      createdAt: this.createdAt.toISOString(),
+      updatedAt: this.updatedAt.toISOString(),
     };
   }
 }

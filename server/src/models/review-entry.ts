@@ -1,4 +1,12 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
 import type { ReviewEntry as ReviewEntryDto } from '@tumblewise/shared';
 import type { User } from './user';
 
@@ -16,20 +24,30 @@ export class ReviewEntry extends Model<InferAttributes<ReviewEntry>, InferCreati
   declare reviewer?: NonAttribute<User | null>;
 
   static initModel(sequelize: Sequelize): void {
-    ReviewEntry.init({
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      workspaceId: { type: DataTypes.UUID, allowNull: false },
-      variantId: { type: DataTypes.UUID, allowNull: false },
-      kind: { type: DataTypes.STRING(30), allowNull: false },
-      authorId: { type: DataTypes.UUID, allowNull: true },
-      reviewerId: { type: DataTypes.UUID, allowNull: true },
-      body: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
-      createdAt: DataTypes.DATE,
-    }, { sequelize, tableName: 'review_entries', updatedAt: false });
+    ReviewEntry.init(
+      {
+        id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+        workspaceId: { type: DataTypes.UUID, allowNull: false },
+        variantId: { type: DataTypes.UUID, allowNull: false },
+        kind: { type: DataTypes.STRING(30), allowNull: false },
+        authorId: { type: DataTypes.UUID, allowNull: true },
+        reviewerId: { type: DataTypes.UUID, allowNull: true },
+        body: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        createdAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'review_entries', updatedAt: false },
+    );
   }
 
   toDto(): ReviewEntryDto {
     const who = (u?: User | null) => (u ? { id: u.id, name: u.name } : null);
-    return { id: this.id, kind: this.kind, author: who(this.author), reviewer: who(this.reviewer), body: this.body, createdAt: this.createdAt.toISOString() };
+    return {
+      id: this.id,
+      kind: this.kind,
+      author: who(this.author),
+      reviewer: who(this.reviewer),
+      body: this.body,
+      createdAt: this.createdAt.toISOString(),
+    };
   }
 }

@@ -1,4 +1,12 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import type { User } from './user';
 
 /**
@@ -15,13 +23,16 @@ export class SignInSession extends Model<InferAttributes<SignInSession>, InferCr
   declare updatedAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize): void {
-    SignInSession.init({
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      revokedAt: { type: DataTypes.DATE, allowNull: true },
-      revokedReason: { type: DataTypes.STRING(40), allowNull: true },
-      userAgent: { type: DataTypes.STRING(300), allowNull: true },
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
-    }, { sequelize, tableName: 'sign_in_sessions' });
+    SignInSession.init(
+      {
+        id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+        revokedAt: { type: DataTypes.DATE, allowNull: true },
+        revokedReason: { type: DataTypes.STRING(40), allowNull: true },
+        userAgent: { type: DataTypes.STRING(300), allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'sign_in_sessions' },
+    );
   }
 }

@@ -12,15 +12,18 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare updatedAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize): void {
-    User.init({
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      email: { type: DataTypes.STRING(254), allowNull: false, unique: true },
-      name: { type: DataTypes.STRING(120), allowNull: false },
-      passwordHash: { type: DataTypes.STRING(100), allowNull: false },
-      isOperator: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
-    }, { sequelize, tableName: 'users' });
+    User.init(
+      {
+        id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+        email: { type: DataTypes.STRING(254), allowNull: false, unique: true },
+        name: { type: DataTypes.STRING(120), allowNull: false },
+        passwordHash: { type: DataTypes.STRING(100), allowNull: false },
+        isOperator: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'users' },
+    );
   }
 
   /** The API shape: never the password hash. */

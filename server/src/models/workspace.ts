@@ -30,31 +30,34 @@ export class Workspace extends Model<InferAttributes<Workspace>, InferCreationAt
   declare updatedAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize): void {
-    Workspace.init({
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      name: { type: DataTypes.STRING(80), allowNull: false },
-      state: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'active' },
-      planId: DataTypes.STRING(40),
-      seats: DataTypes.INTEGER,
-      customerId: DataTypes.STRING(80),
-      subscriptionId: DataTypes.STRING(80),
-      subscriptionItemId: DataTypes.STRING(80),
-      subscriptionStatus: DataTypes.STRING(20),
-      cancelAtPeriodEnd: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
-      currentPeriodEnd: DataTypes.DATE,
-      trialEndsAt: DataTypes.DATE,
-      cardBrand: DataTypes.STRING(20),
-      cardLast4: DataTypes.STRING(4),
-      cardExpMonth: DataTypes.INTEGER,
-      cardExpYear: DataTypes.INTEGER,
-      pastDueSince: DataTypes.DATE,
-      billingEventAt: DataTypes.DATE,
-      suspendedReason: DataTypes.STRING(500),
-      settings: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
-      lastActivityAt: DataTypes.DATE,
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
-    }, { sequelize, tableName: 'workspaces' });
+    Workspace.init(
+      {
+        id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+        name: { type: DataTypes.STRING(80), allowNull: false },
+        state: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'active' },
+        planId: DataTypes.STRING(40),
+        seats: DataTypes.INTEGER,
+        customerId: DataTypes.STRING(80),
+        subscriptionId: DataTypes.STRING(80),
+        subscriptionItemId: DataTypes.STRING(80),
+        subscriptionStatus: DataTypes.STRING(20),
+        cancelAtPeriodEnd: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        currentPeriodEnd: DataTypes.DATE,
+        trialEndsAt: DataTypes.DATE,
+        cardBrand: DataTypes.STRING(20),
+        cardLast4: DataTypes.STRING(4),
+        cardExpMonth: DataTypes.INTEGER,
+        cardExpYear: DataTypes.INTEGER,
+        pastDueSince: DataTypes.DATE,
+        billingEventAt: DataTypes.DATE,
+        suspendedReason: DataTypes.STRING(500),
+        settings: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
+        lastActivityAt: DataTypes.DATE,
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'workspaces' },
+    );
   }
 
   /** Days a past-due workspace keeps working before it turns read-only (set from config at start). */
@@ -73,8 +76,12 @@ export class Workspace extends Model<InferAttributes<Workspace>, InferCreationAt
 
   toDto(): WorkspaceDto {
     return {
-      id: this.id, name: this.name, state: this.effectiveState(), readOnlyFrom: this.readOnlyFrom()?.toISOString() ?? null,
-      suspendedReason: this.state === 'suspended' ? this.suspendedReason ?? null : null, createdAt: this.createdAt.toISOString(),
+      id: this.id,
+      name: this.name,
+      state: this.effectiveState(),
+      readOnlyFrom: this.readOnlyFrom()?.toISOString() ?? null,
+      suspendedReason: this.state === 'suspended' ? (this.suspendedReason ?? null) : null,
+      createdAt: this.createdAt.toISOString(),
     };
   }
 }

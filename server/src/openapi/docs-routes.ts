@@ -13,16 +13,24 @@ export function docsRoutes(ctx: AppContext): Router {
       info: {
         title: 'Tumblewise API',
         version: '1',
-        description: 'Mass properties, spin stability and trade figures of sports equipment, per workspace. SI units in all data. Errors are `{ "error": { "code", "message", "field"? } }`.',
+        description:
+          'Mass properties, spin stability and trade figures of sports equipment, per workspace. SI units in all data. Errors are `{ "error": { "code", "message", "field"? } }`.',
       },
       servers: [{ url: '/' }],
     });
     return document;
   };
-  router.get('/openapi.json', (_req, res) => { res.json(build()); });
-  router.use('/docs', swaggerUi.serveFiles(undefined, { swaggerUrl: '/api/v1/openapi.json' }), swaggerUi.setup(undefined, {
-    swaggerUrl: '/api/v1/openapi.json', customSiteTitle: 'Tumblewise API',
-    swaggerOptions: { url: '/api/v1/openapi.json' },
-  }));
+  router.get('/openapi.json', (_req, res) => {
+    res.json(build());
+  });
+  router.use(
+    '/docs',
+    swaggerUi.serveFiles(undefined, { swaggerUrl: '/api/v1/openapi.json' }),
+    swaggerUi.setup(undefined, {
+      swaggerUrl: '/api/v1/openapi.json',
+      customSiteTitle: 'Tumblewise API',
+      swaggerOptions: { url: '/api/v1/openapi.json' },
+    }),
+  );
   return router;
 }

@@ -16,9 +16,15 @@ async function partDto(part: Part): Promise<PartDto> {
     Variant.count({ where: { partId: part.id, workspaceId: part.workspaceId } }),
   ]);
   return {
-    id: part.id, projectId: part.projectId, name: part.name, draft: part.draft, draftVersion: part.draftVersion,
+    id: part.id,
+    projectId: part.projectId,
+    name: part.name,
+    draft: part.draft,
+    draftVersion: part.draftVersion,
     latestVariant: latest ? { id: latest.id, number: latest.number, status: latest.status, summary: verdictSummary(latest.report) } : null,
-    variantCount: count, createdAt: part.createdAt.toISOString(), updatedAt: part.updatedAt.toISOString(),
+    variantCount: count,
+    createdAt: part.createdAt.toISOString(),
+    updatedAt: part.updatedAt.toISOString(),
   };
 }
 
@@ -29,8 +35,11 @@ export function partRoutes(ctx: AppContext, router: Router): void {
   const partParams = z.object({ partId: idSchema });
 
   route({
-    method: 'get', path: '/projects/:projectId/parts', summary: 'The parts of a project with their latest verdict.',
-    access: { kind: 'workspace', permission: 'workspace.read' }, params: projectParams,
+    method: 'get',
+    path: '/projects/:projectId/parts',
+    summary: 'The parts of a project with their latest verdict.',
+    access: { kind: 'workspace', permission: 'workspace.read' },
+    params: projectParams,
     success: { status: 200, description: 'Parts.', schema: z.array(partSchema) },
     handler: async ({ params }, req) => {
       const { workspaceId } = membershipOf(req);
@@ -41,8 +50,12 @@ export function partRoutes(ctx: AppContext, router: Router): void {
   });
 
   route({
-    method: 'post', path: '/projects/:projectId/parts', summary: 'Create a part.',
-    access: { kind: 'workspace', permission: 'projects.edit' }, params: projectParams, body: createPartBodySchema,
+    method: 'post',
+    path: '/projects/:projectId/parts',
+    summary: 'Create a part.',
+    access: { kind: 'workspace', permission: 'projects.edit' },
+    params: projectParams,
+    body: createPartBodySchema,
     success: { status: 201, description: 'The part.', schema: partSchema },
     handler: async ({ params, body }, req) => {
       const { workspaceId } = membershipOf(req);
@@ -53,15 +66,23 @@ export function partRoutes(ctx: AppContext, router: Router): void {
   });
 
   route({
-    method: 'get', path: '/parts/:partId', summary: 'One part with its draft.',
-    access: { kind: 'workspace', permission: 'workspace.read' }, params: partParams,
+    method: 'get',
+    path: '/parts/:partId',
+    summary: 'One part with its draft.',
+    access: { kind: 'workspace', permission: 'workspace.read' },
+    params: partParams,
     success: { status: 200, description: 'The part.', schema: partSchema },
     handler: async ({ params }, req) => partDto(await findInWorkspace(Part, params.partId, membershipOf(req).workspaceId, 'Part')),
   });
 
   route({
-    method: 'patch', path: '/parts/:partId', summary: 'Autosave the draft or rename; send the draftVersion you loaded (409 when someone saved since).',
-    access: { kind: 'workspace', permission: 'projects.edit' }, params: partParams, body: savePartDraftBodySchema, errors: [409],
+    method: 'patch',
+    path: '/parts/:partId',
+    summary: 'Autosave the draft or rename; send the draftVersion you loaded (409 when someone saved since).',
+    access: { kind: 'workspace', permission: 'projects.edit' },
+    params: partParams,
+    body: savePartDraftBodySchema,
+    errors: [409],
     success: { status: 200, description: 'The part with its new draftVersion.', schema: partSchema },
     handler: async ({ params, body }, req) => {
       const { workspaceId } = membershipOf(req);
@@ -70,17 +91,26 @@ export function partRoutes(ctx: AppContext, router: Router): void {
       if (body.name !== undefined) changes.name = body.name;
       if (body.draft !== undefined) changes.draft = body.draft;
       // Compare-and-set on the version: a stale save changes nothing.
-      const [updated] = await Part.update(changes as Partial<Part>, { where: { id: params.partId, workspaceId, draftVersion: body.draftVersion } });
+      const [updated] = await Part.update(changes as Partial<Part>, {
+        where: { id: params.partId, workspaceId, draftVersion: body.draftVersion },
+      });
       if (updated === 0) {
-        throw AppError.conflict('stale_version', 'Someone saved this part after you loaded it. Reload to see their changes; your edits are still on your screen.', 'draftVersion');
+        throw AppError.conflict(
+          'stale_version',
+          'Someone saved this part after you loaded it. Reload to see their changes; your edits are still on your screen.',
+          'draftVersion',
+        );
       }
       return partDto((await Part.findByPk(params.partId))!);
     },
   });
 
   route({
-    method: 'delete', path: '/parts/:partId', summary: 'Delete a part and its variants.',
-    access: { kind: 'workspace', permission: 'projects.edit' }, params: partParams,
+    method: 'delete',
+    path: '/parts/:partId',
+    summary: 'Delete a part and its variants.',
+    access: { kind: 'workspace', permission: 'projects.edit' },
+    params: partParams,
     success: { status: 204, description: 'Deleted.' },
     handler: async ({ params }, req) => {
       const part = await findInWorkspace(Part, params.partId, membershipOf(req).workspaceId, 'Part');

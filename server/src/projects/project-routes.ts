@@ -13,7 +13,9 @@ export function projectRoutes(ctx: AppContext, router: Router): void {
   const route = routeGroup(router, ctx.catalogue, '/workspaces/:workspaceId');
 
   route({
-    method: 'get', path: '/projects', summary: 'List the workspace’s projects, most recently changed first.',
+    method: 'get',
+    path: '/projects',
+    summary: 'List the workspace’s projects, most recently changed first.',
     access: { kind: 'workspace', permission: 'workspace.read' },
     success: { status: 200, description: 'Projects.', schema: z.array(projectSchema) },
     handler: async (_input, req) => {
@@ -23,12 +25,19 @@ export function projectRoutes(ctx: AppContext, router: Router): void {
   });
 
   route({
-    method: 'post', path: '/projects', summary: 'Create a project.',
-    access: { kind: 'workspace', permission: 'projects.edit' }, body: createProjectBodySchema,
+    method: 'post',
+    path: '/projects',
+    summary: 'Create a project.',
+    access: { kind: 'workspace', permission: 'projects.edit' },
+    body: createProjectBodySchema,
     success: { status: 201, description: 'The new project.', schema: projectSchema },
     handler: async ({ body, auth }, req) => {
       const project = await Project.create({
-        workspaceId: membershipOf(req).workspaceId, name: body.name, category: body.category, notes: body.notes ?? '', createdById: auth!.user.id,
+        workspaceId: membershipOf(req).workspaceId,
+        name: body.name,
+        category: body.category,
+        notes: body.notes ?? '',
+        createdById: auth!.user.id,
       });
       return project.toDto();
     },
@@ -37,22 +46,36 @@ export function projectRoutes(ctx: AppContext, router: Router): void {
   const params = z.object({ projectId: idSchema });
 
   route({
-    method: 'get', path: '/projects/:projectId', summary: 'One project.',
-    access: { kind: 'workspace', permission: 'workspace.read' }, params,
+    method: 'get',
+    path: '/projects/:projectId',
+    summary: 'One project.',
+    access: { kind: 'workspace', permission: 'workspace.read' },
+    params,
     success: { status: 200, description: 'The project.', schema: projectSchema },
     handler: async ({ params: p }, req) => (await findInWorkspace(Project, p.projectId, membershipOf(req).workspaceId, 'Project')).toDto(),
   });
 
   route({
-    method: 'patch', path: '/projects/:projectId', summary: 'Rename, recategorise, annotate, archive or restore a project.',
-    access: { kind: 'workspace', permission: 'projects.edit' }, params, body: updateProjectBodySchema,
+    method: 'patch',
+    path: '/projects/:projectId',
+    summary: 'Rename, recategorise, annotate, archive or restore a project.',
+    access: { kind: 'workspace', permission: 'projects.edit' },
+    params,
+    body: updateProjectBodySchema,
     success: { status: 200, description: 'The project.', schema: projectSchema },
     handler: async ({ params: p, body, auth }, req) => {
       const { workspaceId } = membershipOf(req);
       const project = await findInWorkspace(Project, p.projectId, workspaceId, 'Project');
       await project.update(body);
       if (body.archived !== undefined) {
-        await recordAudit({ workspaceId, actorId: auth!.user.id, action: body.archived ? 'project.archived' : 'project.restored', targetType: 'project', targetId: project.id, targetLabel: project.name });
+        await recordAudit({
+          workspaceId,
+          actorId: auth!.user.id,
+          action: body.archived ? 'project.archived' : 'project.restored',
+          targetType: 'project',
+          targetId: project.id,
+          targetLabel: project.name,
+        });
       }
       return project.toDto();
     },

@@ -25,7 +25,9 @@ export class ScatterQueue {
       boss.on('error', (err) => this.ctx.logger.warn({ err: String(err) }, 'job queue error'));
       await boss.start();
       await boss.createQueue(QUEUE, { name: QUEUE, retryLimit: 0, expireInSeconds: 3600 });
-      await boss.work<{ studyId: string }>(QUEUE, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async ([job]) => this.run(job.data.studyId));
+      await boss.work<{ studyId: string }>(QUEUE, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async ([job]) =>
+        this.run(job.data.studyId),
+      );
       return boss;
     })();
     return this.boss;
@@ -53,19 +55,27 @@ export class ScatterQueue {
     const { port1, port2 } = new MessageChannel();
     let writing = Promise.resolve();
     port1.on('message', ({ done, total }: { done: number; total: number }) => {
-      writing = writing.then(async () => {
-        // Progress tick: record it, and stop if someone cancelled meanwhile.
-        const [, rows] = await ScatterStudy.update({ progress: Math.min(0.99, done / total) }, { where: { id: studyId, state: 'running' }, returning: true });
-        if (rows.length === 0) controller.abort();
-      }).catch(() => undefined);
+      writing = writing
+        .then(async () => {
+          // Progress tick: record it, and stop if someone cancelled meanwhile.
+          const [, rows] = await ScatterStudy.update(
+            { progress: Math.min(0.99, done / total) },
+            { where: { id: studyId, state: 'running' }, returning: true },
+          );
+          if (rows.length === 0) controller.abort();
+        })
+        .catch(() => undefined);
     });
     try {
-      const result = await this.ctx.compute.run<object>({
-        kind: 'scatter',
-        input: { part: study.document, tolerances: { primitives: study.tolerances }, samples: study.samples, seed: study.seed },
-        references: await taskReferences(study.workspaceId, study.document),
-        progress: port2,
-      }, controller.signal);
+      const result = await this.ctx.compute.run<object>(
+        {
+          kind: 'scatter',
+          input: { part: study.document, tolerances: { primitives: study.tolerances }, samples: study.samples, seed: study.seed },
+          references: await taskReferences(study.workspaceId, study.document),
+          progress: port2,
+        },
+        controller.signal,
+      );
       await writing;
       await ScatterStudy.update({ state: 'done', progress: 1, result }, { where: { id: studyId, state: 'running' } });
     } catch (err) {

@@ -17,8 +17,11 @@ export function scatterRoutes(ctx: AppContext, router: Router): void {
   const route = routeGroup(router, ctx.catalogue, '/workspaces/:workspaceId');
 
   route({
-    method: 'post', path: '/scatter', summary: 'Start a Monte Carlo study over density and dimension tolerances of a variant or a part document.',
-    access: { kind: 'workspace', permission: 'projects.edit' }, body: startScatterBodySchema,
+    method: 'post',
+    path: '/scatter',
+    summary: 'Start a Monte Carlo study over density and dimension tolerances of a variant or a part document.',
+    access: { kind: 'workspace', permission: 'projects.edit' },
+    body: startScatterBodySchema,
     success: { status: 202, description: 'The queued study; follow it with GET /scatter/:studyId.', schema: scatterStudySchema },
     handler: async ({ body, auth }, req) => {
       const { workspaceId } = membershipOf(req);
@@ -26,13 +29,19 @@ export function scatterRoutes(ctx: AppContext, router: Router): void {
       if (body.variantId) document = (await findInWorkspace(Variant, body.variantId, workspaceId, 'Variant')).document;
       // Refuse a bad document now rather than in a failed job.
       const checked = validatePartDocument(document);
-      if (!checked.ok) throw AppError.badRequest(`part ${checked.errors[0].path} ${checked.errors[0].message}.`, `part.${checked.errors[0].path}`);
+      if (!checked.ok)
+        throw AppError.badRequest(`part ${checked.errors[0].path} ${checked.errors[0].message}.`, `part.${checked.errors[0].path}`);
       const ids = new Set(checked.value.primitives.map((p) => p.id));
       const unknown = Object.keys(body.tolerances ?? {}).find((id) => !ids.has(id));
       if (unknown) throw AppError.badRequest(`tolerances.${unknown} names no primitive of the part.`, `tolerances.${unknown}`);
       const study = await ScatterStudy.create({
-        workspaceId, variantId: body.variantId ?? null, document, tolerances: body.tolerances ?? {}, samples: body.samples,
-        seed: body.seed ?? randomInt(0, 2 ** 31 - 1), createdById: auth!.user.id,
+        workspaceId,
+        variantId: body.variantId ?? null,
+        document,
+        tolerances: body.tolerances ?? {},
+        samples: body.samples,
+        seed: body.seed ?? randomInt(0, 2 ** 31 - 1),
+        createdById: auth!.user.id,
       });
       await ctx.scatter.enqueue(study.id);
       return (await study.reload()).toDto();
@@ -40,15 +49,23 @@ export function scatterRoutes(ctx: AppContext, router: Router): void {
   });
 
   route({
-    method: 'get', path: '/scatter/:studyId', summary: 'A study’s state, progress and (when done) its result.',
-    access: { kind: 'workspace', permission: 'workspace.read' }, params,
+    method: 'get',
+    path: '/scatter/:studyId',
+    summary: 'A study’s state, progress and (when done) its result.',
+    access: { kind: 'workspace', permission: 'workspace.read' },
+    params,
     success: { status: 200, description: 'The study.', schema: scatterStudySchema },
-    handler: async ({ params: p }, req) => (await findInWorkspace(ScatterStudy, p.studyId, membershipOf(req).workspaceId, 'Scatter study')).toDto(),
+    handler: async ({ params: p }, req) =>
+      (await findInWorkspace(ScatterStudy, p.studyId, membershipOf(req).workspaceId, 'Scatter study')).toDto(),
   });
 
   route({
-    method: 'post', path: '/scatter/:studyId/cancel', summary: 'Cancel a queued or running study.',
-    access: { kind: 'workspace', permission: 'projects.edit' }, params, errors: [409],
+    method: 'post',
+    path: '/scatter/:studyId/cancel',
+    summary: 'Cancel a queued or running study.',
+    access: { kind: 'workspace', permission: 'projects.edit' },
+    params,
+    errors: [409],
     success: { status: 200, description: 'The cancelled study.', schema: scatterStudySchema },
     handler: async ({ params: p }, req) => {
       const study = await findInWorkspace(ScatterStudy, p.studyId, membershipOf(req).workspaceId, 'Scatter study');

@@ -3,8 +3,12 @@ import { startTestApp, type TestApp } from '../test-support/test-app';
 import { DEMO_USERS, seedDemo } from './demo-seed';
 
 let t: TestApp;
-beforeAll(async () => { t = await startTestApp(); });
-afterAll(async () => { await t.close(); });
+beforeAll(async () => {
+  t = await startTestApp();
+});
+afterAll(async () => {
+  await t.close();
+});
 
 it('seeds the invented demo workspace once: members of each role, designs, a review in progress, rig data', async () => {
   expect(await seedDemo(t.ctx)).toBe(true);

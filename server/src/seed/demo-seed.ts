@@ -24,7 +24,13 @@ const DEMO_PROJECTS = [
 /** Seeds the demo workspace once, then its designs once; answers whether anything was added. */
 export async function seedDemo(ctx: AppContext): Promise<boolean> {
   const accounts = await seedDemoAccounts(ctx);
-  const owner = await Membership.findOne({ where: { role: 'owner' }, include: [{ model: User, as: 'user', where: { email: DEMO_USERS[0].email }, required: true }, { model: Workspace, as: 'workspace', required: true }] });
+  const owner = await Membership.findOne({
+    where: { role: 'owner' },
+    include: [
+      { model: User, as: 'user', where: { email: DEMO_USERS[0].email }, required: true },
+      { model: Workspace, as: 'workspace', required: true },
+    ],
+  });
   const designs = owner ? await seedDemoDesigns(ctx, owner.workspace!) : false;
   return accounts || designs;
 }
@@ -40,9 +46,22 @@ async function seedDemoAccounts(ctx: AppContext): Promise<boolean> {
       if (u.role) await Membership.create({ workspaceId: workspace.id, userId: user.id, role: u.role }, { transaction });
       if (u.role === 'owner') ownerId = user.id;
     }
-    await recordAudit({ workspaceId: workspace.id, actorId: ownerId, action: 'workspace.created', targetType: 'workspace', targetId: workspace.id, targetLabel: workspace.name }, transaction);
+    await recordAudit(
+      {
+        workspaceId: workspace.id,
+        actorId: ownerId,
+        action: 'workspace.created',
+        targetType: 'workspace',
+        targetId: workspace.id,
+        targetLabel: workspace.name,
+      },
+      transaction,
+    );
     for (const p of DEMO_PROJECTS) {
-      await Project.create({ workspaceId: workspace.id, name: p.name, category: p.category, notes: p.notes, createdById: ownerId }, { transaction });
+      await Project.create(
+        { workspaceId: workspace.id, name: p.name, category: p.category, notes: p.notes, createdById: ownerId },
+        { transaction },
+      );
     }
   });
   return true;

@@ -9,15 +9,27 @@ import zlib from 'node:zlib';
 import { serveApps } from './serve-apps';
 
 /** One GET over a real socket, the body left exactly as sent (supertest would decode it). */
-function rawGet(app: express.Express, url: string, headers: Record<string, string>): Promise<{ status: number; headers: http.IncomingHttpHeaders; body: Buffer }> {
+function rawGet(
+  app: express.Express,
+  url: string,
+  headers: Record<string, string>,
+): Promise<{ status: number; headers: http.IncomingHttpHeaders; body: Buffer }> {
   return new Promise((resolve, reject) => {
     const server = app.listen(0, '127.0.0.1', () => {
       const { port } = server.address() as AddressInfo;
-      http.get({ host: '127.0.0.1', port, path: url, headers }, (res) => {
-        const chunks: Buffer[] = [];
-        res.on('data', (c: Buffer) => chunks.push(c));
-        res.on('end', () => { server.close(); resolve({ status: res.statusCode!, headers: res.headers, body: Buffer.concat(chunks) }); });
-      }).on('error', (err) => { server.close(); reject(err); });
+      http
+        .get({ host: '127.0.0.1', port, path: url, headers }, (res) => {
+          const chunks: Buffer[] = [];
+          res.on('data', (c: Buffer) => chunks.push(c));
+          res.on('end', () => {
+            server.close();
+            resolve({ status: res.statusCode!, headers: res.headers, body: Buffer.concat(chunks) });
+          });
+        })
+        .on('error', (err) => {
+          server.close();
+          reject(err);
+        });
     });
   });
 }

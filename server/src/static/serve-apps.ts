@@ -22,15 +22,23 @@ export function serveApps(distDir: string): Router {
   const mount = (prefix: string, folder: string, name: string) => {
     const root = path.join(distDir, folder, 'browser');
     const index = path.join(root, 'index.html');
-    router.use(prefix, express.static(root, {
-      index: false,
-      setHeaders: (res, file) => { res.setHeader('Cache-Control', cacheControl(file)); },
-    }));
+    router.use(
+      prefix,
+      express.static(root, {
+        index: false,
+        setHeaders: (res, file) => {
+          res.setHeader('Cache-Control', cacheControl(file));
+        },
+      }),
+    );
     // `{/*splat}` also matches the bare prefix: Express 5's `/*splat` needs one segment, so `/` answered 404.
     router.get(prefix === '/' ? '{/*splat}' : `${prefix}{/*splat}`, (req, res, next) => {
       if (prefix === '/' && (belongsTo(req.path, '/api') || belongsTo(req.path, '/admin'))) return next();
       if (!existsSync(index)) {
-        res.status(503).type('text/plain').send(`The ${name} app has not been built yet. Run "npm start" (it builds the apps) or "npm run build".`);
+        res
+          .status(503)
+          .type('text/plain')
+          .send(`The ${name} app has not been built yet. Run "npm start" (it builds the apps) or "npm run build".`);
         return;
       }
       res.setHeader('Cache-Control', 'no-cache');

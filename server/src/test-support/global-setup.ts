@@ -22,7 +22,13 @@ export default async function globalSetup(): Promise<void> {
     throwaway: true,
     database: 'tw_template',
   });
-  const env = { ...services.env, DATA_DIR: path.join(root, 'data'), TEST_ROOT: root, TEST_ADMIN_DATABASE_URL: services.cluster.url('postgres'), NODE_ENV: 'test' };
+  const env = {
+    ...services.env,
+    DATA_DIR: path.join(root, 'data'),
+    TEST_ROOT: root,
+    TEST_ADMIN_DATABASE_URL: services.cluster.url('postgres'),
+    NODE_ENV: 'test',
+  };
   const sequelize = createDatabase(services.env.DATABASE_URL);
   await migrate(sequelize);
   await sequelize.close();

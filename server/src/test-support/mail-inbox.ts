@@ -17,10 +17,19 @@ export async function mailsTo(address: string, inboxUrl = process.env.MAIL_INBOX
 }
 
 /** Waits for the newest mail to `address` (mail sending is asynchronous for some routes). */
-export async function waitForMail(address: string, options: { count?: number; timeoutMs?: number; inboxUrl?: string } = {}): Promise<ReceivedMail> {
-  const mails = await eventually(() => mailsTo(address, options.inboxUrl), (m) => m.length >= (options.count ?? 1), {
-    what: `mail to ${address}`, timeoutMs: options.timeoutMs ?? 10000, intervalMs: 100,
-  });
+export async function waitForMail(
+  address: string,
+  options: { count?: number; timeoutMs?: number; inboxUrl?: string } = {},
+): Promise<ReceivedMail> {
+  const mails = await eventually(
+    () => mailsTo(address, options.inboxUrl),
+    (m) => m.length >= (options.count ?? 1),
+    {
+      what: `mail to ${address}`,
+      timeoutMs: options.timeoutMs ?? 10000,
+      intervalMs: 100,
+    },
+  );
   return mails[mails.length - 1];
 }
 

@@ -12,7 +12,10 @@ export function cubeTriangles(size = 1): Tri[] {
     [v(0, 0, 0), v(0, 0, 1), v(0, 1, 1), v(0, 1, 0)], // left (−x)
     [v(1, 0, 0), v(1, 1, 0), v(1, 1, 1), v(1, 0, 1)], // right (+x)
   ];
-  return quads.flatMap(([a, b, c, d]) => [[a, b, c], [a, c, d]]);
+  return quads.flatMap(([a, b, c, d]) => [
+    [a, b, c],
+    [a, c, d],
+  ]);
 }
 
 export function binaryStl(triangles: Tri[], countOverride?: number): Buffer {
@@ -27,6 +30,8 @@ export function binaryStl(triangles: Tri[], countOverride?: number): Buffer {
 }
 
 export function asciiStl(triangles: Tri[]): Buffer {
-  const facets = triangles.map((t) => `  facet normal 0 0 0\n    outer loop\n${t.map((p) => `      vertex ${p.join(' ')}`).join('\n')}\n    endloop\n  endfacet`);
+  const facets = triangles.map(
+    (t) => `  facet normal 0 0 0\n    outer loop\n${t.map((p) => `      vertex ${p.join(' ')}`).join('\n')}\n    endloop\n  endfacet`,
+  );
   return Buffer.from(`solid cube\n${facets.join('\n')}\nendsolid cube\n`, 'ascii');
 }

@@ -41,15 +41,26 @@ export async function startTestApp(env: Record<string, string> = {}, options: Pa
 }
 
 /** Signs up a new workspace owner and answers the session body and the refresh cookie. */
-export async function signUp(app: Express, overrides: Partial<{ workspaceName: string; name: string; email: string; password: string }> = {}) {
+export async function signUp(
+  app: Express,
+  overrides: Partial<{ workspaceName: string; name: string; email: string; password: string }> = {},
+) {
   const suffix = randomBytes(4).toString('hex');
   const body = {
-    workspaceName: `Workshop ${suffix}`, name: `Owner ${suffix}`, email: `owner-${suffix}@example.test`, password: 'correct-horse-42', ...overrides,
+    workspaceName: `Workshop ${suffix}`,
+    name: `Owner ${suffix}`,
+    email: `owner-${suffix}@example.test`,
+    password: 'correct-horse-42',
+    ...overrides,
   };
   const res = await request(app).post('/api/v1/auth/signup').send(body).expect(201);
   return { ...res.body, password: body.password, cookie: refreshCookieOf(res.headers['set-cookie']) } as {
-    accessToken: string; user: { id: string; email: string; name: string }; workspace: { id: string; name: string };
-    memberships: { workspace: { id: string }; role: string }[]; password: string; cookie: string;
+    accessToken: string;
+    user: { id: string; email: string; name: string };
+    workspace: { id: string; name: string };
+    memberships: { workspace: { id: string }; role: string }[];
+    password: string;
+    cookie: string;
   };
 }
 

@@ -12,9 +12,27 @@ type Load = { path: string; method?: string; headers?: Record<string, string>; b
 
 /** One autocannon run on loopback; answers per second counted from 2xx responses only. */
 async function hammer(baseUrl: string, load: Load, seconds: number) {
-  const result = await autocannon({ url: `${baseUrl}${load.path}`, connections: CONNECTIONS, duration: seconds, method: load.method ?? 'GET', headers: load.headers, body: load.body });
-  const ok = Object.entries(result.statusCodeStats ?? {}).filter(([code]) => code.startsWith('2')).reduce((s, [, v]) => s + Number(v.count), 0);
-  return { perSecond: ok / result.duration, meanPerSecond: result.requests.average, latencyP50: result.latency.p50, latencyP99: result.latency.p99, non2xx: result.non2xx, errors: result.errors, timeouts: result.timeouts, bytesPerSecond: result.throughput.average };
+  const result = await autocannon({
+    url: `${baseUrl}${load.path}`,
+    connections: CONNECTIONS,
+    duration: seconds,
+    method: load.method ?? 'GET',
+    headers: load.headers,
+    body: load.body,
+  });
+  const ok = Object.entries(result.statusCodeStats ?? {})
+    .filter(([code]) => code.startsWith('2'))
+    .reduce((s, [, v]) => s + Number(v.count), 0);
+  return {
+    perSecond: ok / result.duration,
+    meanPerSecond: result.requests.average,
+    latencyP50: result.latency.p50,
+    latencyP99: result.latency.p99,
+    non2xx: result.non2xx,
+    errors: result.errors,
+    timeouts: result.timeouts,
+    bytesPerSecond: result.throughput.average,
+  };
 }
 
 /**
@@ -26,12 +44,15 @@ export async function measureAnalyzeThroughput(baseUrl: string, table: BenchTabl
   const session = await signInDesigner(baseUrl);
   const health: Load = { path: '/api/v1/health/live' };
   const analyze: Load = {
-    path: '/api/v1/analyze', method: 'POST', body: JSON.stringify(editorBenchPart()),
+    path: '/api/v1/analyze',
+    method: 'POST',
+    body: JSON.stringify(editorBenchPart()),
     headers: { 'content-type': 'application/json', authorization: `Bearer ${session.token}` },
   };
   const probe = await fetch(`${baseUrl}${analyze.path}`, { method: 'POST', headers: analyze.headers, body: analyze.body });
   const report = (await probe.json()) as { mass?: number };
-  if (probe.status !== 200 || typeof report.mass !== 'number') throw new Error(`POST /analyze answered ${probe.status}: ${JSON.stringify(report).slice(0, 300)}`);
+  if (probe.status !== 200 || typeof report.mass !== 'number')
+    throw new Error(`POST /analyze answered ${probe.status}: ${JSON.stringify(report).slice(0, 300)}`);
 
   await hammer(baseUrl, health, 2);
   await hammer(baseUrl, analyze, 2);
@@ -52,14 +73,32 @@ export async function measureAnalyzeThroughput(baseUrl: string, table: BenchTabl
   }
   await new Promise((r) => setTimeout(r, 500));
   const pooled = (pick: (r: (typeof rounds)[number]) => Awaited<ReturnType<typeof hammer>>) => ({
-    ...pick(rounds[0]), perSecond: rounds.reduce((sum, r) => sum + pick(r).perSecond, 0) / rounds.length,
-    non2xx: rounds.reduce((sum, r) => sum + pick(r).non2xx, 0), errors: rounds.reduce((sum, r) => sum + pick(r).errors, 0),
+    ...pick(rounds[0]),
+    perSecond: rounds.reduce((sum, r) => sum + pick(r).perSecond, 0) / rounds.length,
+    non2xx: rounds.reduce((sum, r) => sum + pick(r).non2xx, 0),
+    errors: rounds.reduce((sum, r) => sum + pick(r).errors, 0),
   });
-  const h = pooled((r) => r.health), a = pooled((r) => r.analyze);
+  const h = pooled((r) => r.health),
+    a = pooled((r) => r.analyze);
   const ratio = a.perSecond / h.perSecond;
   const refused = (r: typeof h) => (r.non2xx || r.errors ? `; ${r.non2xx} non-2xx, ${r.errors} errors` : '');
-  table.record(`GET /health/live, ${CONNECTIONS} connections, ${ROUNDS} × ${SECONDS} s`, h.perSecond, 'req/s', `p50 ${h.latencyP50} ms, p99 ${h.latencyP99} ms${refused(h)}`);
-  table.record(`POST /analyze, 50 primitives, ${CONNECTIONS} conn., ${ROUNDS} × ${SECONDS} s`, a.perSecond, 'req/s', `p50 ${a.latencyP50} ms, p99 ${a.latencyP99} ms${refused(a)}`);
-  table.record('analyze ÷ health', ratio, '×', `${ratio >= THROUGHPUT_TARGET_RATIO ? `meets ≥ ${THROUGHPUT_TARGET_RATIO}` : `BELOW the ${THROUGHPUT_TARGET_RATIO} target`}; mean of ${ROUNDS} rounds (each ${rounds.map((r) => r.ratio.toFixed(2)).join(', ')})`);
+  table.record(
+    `GET /health/live, ${CONNECTIONS} connections, ${ROUNDS} × ${SECONDS} s`,
+    h.perSecond,
+    'req/s',
+    `p50 ${h.latencyP50} ms, p99 ${h.latencyP99} ms${refused(h)}`,
+  );
+  table.record(
+    `POST /analyze, 50 primitives, ${CONNECTIONS} conn., ${ROUNDS} × ${SECONDS} s`,
+    a.perSecond,
+    'req/s',
+    `p50 ${a.latencyP50} ms, p99 ${a.latencyP99} ms${refused(a)}`,
+  );
+  table.record(
+    'analyze ÷ health',
+    ratio,
+    '×',
+    `${ratio >= THROUGHPUT_TARGET_RATIO ? `meets ≥ ${THROUGHPUT_TARGET_RATIO}` : `BELOW the ${THROUGHPUT_TARGET_RATIO} target`}; mean of ${ROUNDS} rounds (each ${rounds.map((r) => r.ratio.toFixed(2)).join(', ')})`,
+  );
   return { rounds, health: h, analyze: a, ratio, requestBytes: analyze.body!.length, reportBytes: JSON.stringify(report).length };
 }

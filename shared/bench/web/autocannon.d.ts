@@ -1,6 +1,12 @@
 // The part of autocannon's programmatic API the throughput benchmark uses (the package ships no types).
 declare module 'autocannon' {
-  interface Histogram { average: number; p50: number; p99: number; max: number; total?: number }
+  interface Histogram {
+    average: number;
+    p50: number;
+    p99: number;
+    max: number;
+    total?: number;
+  }
   interface Options {
     url: string;
     connections?: number;

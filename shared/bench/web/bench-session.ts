@@ -22,7 +22,12 @@ async function call<T>(baseUrl: string, method: string, path: string, body?: unk
 
 /** Signs the demo designer in through the API. */
 export async function signInDesigner(baseUrl: string): Promise<ApiSession> {
-  const session = await call<{ accessToken: string; memberships: { workspace: { id: string } }[] }>(baseUrl, 'post', '/auth/signin', DEMO_DESIGNER);
+  const session = await call<{ accessToken: string; memberships: { workspace: { id: string } }[] }>(
+    baseUrl,
+    'post',
+    '/auth/signin',
+    DEMO_DESIGNER,
+  );
   const workspaceId = session.memberships[0]?.workspace.id;
   if (!workspaceId) throw new Error('the demo designer belongs to no workspace (was the demo data seeded?)');
   return { token: session.accessToken, workspaceId };
@@ -30,8 +35,20 @@ export async function signInDesigner(baseUrl: string): Promise<ApiSession> {
 
 /** Creates a project with the 50-primitive bench part as the part's draft; returns the editor's path. */
 export async function createBenchPart(baseUrl: string, s: ApiSession): Promise<string> {
-  const project = await call<{ id: string }>(baseUrl, 'post', `/workspaces/${s.workspaceId}/projects`, { name: `Bench ${Date.now().toString(36)}`, category: 'other' }, s.token);
-  const part = await call<{ id: string }>(baseUrl, 'post', `/workspaces/${s.workspaceId}/projects/${project.id}/parts`, { name: 'Bench plate', draft: editorBenchPart() }, s.token);
+  const project = await call<{ id: string }>(
+    baseUrl,
+    'post',
+    `/workspaces/${s.workspaceId}/projects`,
+    { name: `Bench ${Date.now().toString(36)}`, category: 'other' },
+    s.token,
+  );
+  const part = await call<{ id: string }>(
+    baseUrl,
+    'post',
+    `/workspaces/${s.workspaceId}/projects/${project.id}/parts`,
+    { name: 'Bench plate', draft: editorBenchPart() },
+    s.token,
+  );
   return `/projects/${project.id}/parts/${part.id}`;
 }
 

@@ -19,10 +19,16 @@ function networkLog(cdp: CDPSession) {
   const fetched: Fetched[] = [];
   const pending = new Map<string, { url: string; type: string; encoding: string }>();
   let lastActivity = Date.now();
-  cdp.on('Network.requestWillBeSent', (e) => { pending.set(e.requestId, { url: e.request.url, type: e.type ?? 'Other', encoding: '' }); lastActivity = Date.now(); });
+  cdp.on('Network.requestWillBeSent', (e) => {
+    pending.set(e.requestId, { url: e.request.url, type: e.type ?? 'Other', encoding: '' });
+    lastActivity = Date.now();
+  });
   cdp.on('Network.responseReceived', (e) => {
     const p = pending.get(e.requestId);
-    if (p) { p.type = e.type; p.encoding = String(e.response.headers['content-encoding'] ?? e.response.headers['Content-Encoding'] ?? ''); }
+    if (p) {
+      p.type = e.type;
+      p.encoding = String(e.response.headers['content-encoding'] ?? e.response.headers['Content-Encoding'] ?? '');
+    }
     lastActivity = Date.now();
   });
   cdp.on('Network.loadingFinished', (e) => {
@@ -31,7 +37,10 @@ function networkLog(cdp: CDPSession) {
     pending.delete(e.requestId);
     lastActivity = Date.now();
   });
-  cdp.on('Network.loadingFailed', (e) => { pending.delete(e.requestId); lastActivity = Date.now(); });
+  cdp.on('Network.loadingFailed', (e) => {
+    pending.delete(e.requestId);
+    lastActivity = Date.now();
+  });
   return {
     fetched,
     /** Resolves once nothing has been in flight for `quietMs`. */
@@ -42,7 +51,18 @@ function networkLog(cdp: CDPSession) {
 }
 
 const kB = (bytes: number) => bytes / 1000;
-const kind = (f: Fetched) => (f.type === 'Script' ? 'JS' : f.type === 'Stylesheet' ? 'CSS' : f.type === 'Font' ? 'fonts' : f.type === 'Document' ? 'HTML' : f.type === 'XHR' || f.type === 'Fetch' ? 'API' : 'other');
+const kind = (f: Fetched) =>
+  f.type === 'Script'
+    ? 'JS'
+    : f.type === 'Stylesheet'
+      ? 'CSS'
+      : f.type === 'Font'
+        ? 'fonts'
+        : f.type === 'Document'
+          ? 'HTML'
+          : f.type === 'XHR' || f.type === 'Fetch'
+            ? 'API'
+            : 'other';
 
 function summarise(fetched: Fetched[]) {
   const by: Record<string, number> = { JS: 0, CSS: 0, fonts: 0, HTML: 0, API: 0, other: 0 };
@@ -55,7 +75,9 @@ function chunkLibraries(): Map<string, string[]> {
   const found = new Map<string, string[]>();
   for (const file of readdirSync(DIST).filter((f) => f.endsWith('.js'))) {
     const text = readFileSync(path.join(DIST, file), 'utf8');
-    const libs = Object.entries(MARKERS).filter(([, marker]) => text.includes(marker)).map(([lib]) => lib);
+    const libs = Object.entries(MARKERS)
+      .filter(([, marker]) => text.includes(marker))
+      .map(([lib]) => lib);
     if (libs.length) found.set(file, libs);
   }
   return found;
@@ -83,14 +105,26 @@ export async function measureInitialTransfer(baseUrl: string, table: BenchTable)
 
     const first = summarise(signIn);
     const both = summarise([...signIn, ...projects]);
-    const verdict = (bytes: number) => (kB(bytes) <= INITIAL_TRANSFER_TARGET_KB ? `meets ≤ ${INITIAL_TRANSFER_TARGET_KB} kB` : `OVER the ${INITIAL_TRANSFER_TARGET_KB} kB target`);
-    const parts = (s: ReturnType<typeof summarise>) => Object.entries(s.by).filter(([, b]) => b > 0).map(([k, b]) => `${k} ${kB(b).toFixed(1)}`).join(', ');
+    const verdict = (bytes: number) =>
+      kB(bytes) <= INITIAL_TRANSFER_TARGET_KB
+        ? `meets ≤ ${INITIAL_TRANSFER_TARGET_KB} kB`
+        : `OVER the ${INITIAL_TRANSFER_TARGET_KB} kB target`;
+    const parts = (s: ReturnType<typeof summarise>) =>
+      Object.entries(s.by)
+        .filter(([, b]) => b > 0)
+        .map(([k, b]) => `${k} ${kB(b).toFixed(1)}`)
+        .join(', ');
     // What index.html itself references (the builder's "initial" chunks); everything else is lazy.
     const html = readFileSync(path.join(DIST, 'index.html'), 'utf8');
     const initialFiles = new Set([...html.matchAll(/(?:src|href)="([^"]+\.(?:js|css))"/g)].map((m) => path.basename(m[1])));
     const initial = signIn.filter((f) => f.type === 'Document' || initialFiles.has(path.basename(new URL(f.url).pathname)));
     const init = summarise(initial);
-    table.record('designer initial chunks (index.html and what it loads)', kB(init.total), 'kB', `${verdict(init.total)}; ${parts(init)}; ${initialFiles.size} files`);
+    table.record(
+      'designer initial chunks (index.html and what it loads)',
+      kB(init.total),
+      'kB',
+      `${verdict(init.total)}; ${parts(init)}; ${initialFiles.size} files`,
+    );
     table.record('designer sign-in page, cold: bytes over the wire', kB(first.total), 'kB', `${verdict(first.total)}; ${parts(first)}`);
     table.record('… then signed in to the projects page: total', kB(both.total), 'kB', `${verdict(both.total)}; ${parts(both)}`);
     for (const k of ['JS', 'CSS', 'fonts'] as const) table.record(`  of which ${k} (sign-in + projects)`, kB(both.by[k]), 'kB');
@@ -99,16 +133,26 @@ export async function measureInitialTransfer(baseUrl: string, table: BenchTable)
     const fetchedFiles = new Set([...signIn, ...projects].map((f) => path.basename(new URL(f.url).pathname)));
     const eager = [...libs].filter(([file]) => fetchedFiles.has(file));
     const lazy = [...libs].filter(([file]) => !fetchedFiles.has(file));
-    const describe = (list: [string, string[]][]) => list.map(([file, l]) => `${file} (${l.join(', ')}, ${(statSync(path.join(DIST, file)).size / 1000).toFixed(0)} kB raw)`);
+    const describe = (list: [string, string[]][]) =>
+      list.map(([file, l]) => `${file} (${l.join(', ')}, ${(statSync(path.join(DIST, file)).size / 1000).toFixed(0)} kB raw)`);
     console.log(`  lazy chunks with a heavy library: ${describe(lazy).join('; ') || 'none'}`);
     console.log(`  heavy libraries fetched on the first screens: ${describe(eager).join('; ') || 'none'}`);
-    const uncompressed = [...signIn, ...projects].filter((f) => ['JS', 'CSS', 'HTML'].includes(kind(f)) && !f.encoding && f.bytes > 1500).map((f) => path.basename(new URL(f.url).pathname));
+    const uncompressed = [...signIn, ...projects]
+      .filter((f) => ['JS', 'CSS', 'HTML'].includes(kind(f)) && !f.encoding && f.bytes > 1500)
+      .map((f) => path.basename(new URL(f.url).pathname));
     if (uncompressed.length) console.log(`  sent without compression: ${uncompressed.join(', ')}`);
-    table.record('heavy-library chunks fetched on the first screens', eager.length, 'chunks', eager.length === 0 ? 'three.js, echarts, mathjs all lazy' : 'SHOULD be lazy');
+    table.record(
+      'heavy-library chunks fetched on the first screens',
+      eager.length,
+      'chunks',
+      eager.length === 0 ? 'three.js, echarts, mathjs all lazy' : 'SHOULD be lazy',
+    );
     return {
       signIn: { ...first, files: signIn.map((f) => ({ ...f, url: new URL(f.url).pathname })) },
       projects: { ...summarise(projects), files: projects.map((f) => ({ ...f, url: new URL(f.url).pathname })) },
-      lazyChunks: Object.fromEntries(lazy), eagerHeavyChunks: Object.fromEntries(eager), uncompressed,
+      lazyChunks: Object.fromEntries(lazy),
+      eagerHeavyChunks: Object.fromEntries(eager),
+      uncompressed,
     };
   } finally {
     await browser.close();

@@ -7,7 +7,9 @@ import { analyzePart, EngineInputError } from '../engine/public-api';
 
 function fail(file: string, code: string, message: string, issues?: { path: string; message: string }[]): void {
   const field = issues?.[0]?.path;
-  process.stderr.write(`${JSON.stringify({ file, error: { code, message, ...(field ? { field } : {}), ...(issues ? { issues } : {}) } })}\n`);
+  process.stderr.write(
+    `${JSON.stringify({ file, error: { code, message, ...(field ? { field } : {}), ...(issues ? { issues } : {}) } })}\n`,
+  );
 }
 
 function main(files: string[]): number {

@@ -1,7 +1,9 @@
 import { buildComparison, comparisonCsv } from './comparison';
 
 const report = (mass: number, verdict: string, i: [number, number, number]) => ({
-  mass, principal: { moments: i }, spin: { verdict, nearestAxis: 'minor', margins: { major: (i[0] - i[1]) / i[1], minor: (i[1] - i[2]) / i[1] } },
+  mass,
+  principal: { moments: i },
+  spin: { verdict, nearestAxis: 'minor', margins: { major: (i[0] - i[1]) / i[1], minor: (i[1] - i[2]) / i[1] } },
 });
 
 describe('buildComparison', () => {
@@ -37,10 +39,12 @@ describe('buildComparison', () => {
 
 describe('comparisonCsv', () => {
   it('writes one line per figure with value and delta columns, quoting and neutralising formulas', () => {
-    const csv = comparisonCsv(buildComparison([
-      { id: 'a', label: 'v1, "light"', report: report(0.3, 'steady', [3, 2, 1]) },
-      { id: 'b', label: '=HYPERLINK("x")', report: report(0.33, 'steady', [3, 2, 1]) },
-    ]));
+    const csv = comparisonCsv(
+      buildComparison([
+        { id: 'a', label: 'v1, "light"', report: report(0.3, 'steady', [3, 2, 1]) },
+        { id: 'b', label: '=HYPERLINK("x")', report: report(0.33, 'steady', [3, 2, 1]) },
+      ]),
+    );
     const lines = csv.trimEnd().split('\r\n');
     expect(lines[0]).toBe('figure,unit,"v1, ""light""","v1, ""light"" (baseline) delta","\'=HYPERLINK(""x"")","\'=HYPERLINK(""x"") delta"');
     expect(lines.find((l) => l.startsWith('Mass,'))).toMatch(/^Mass,kg,0\.3,0,0\.33,0\.03/);

@@ -1,3 +1,5 @@
+import type { SpinReport } from '../engine/report/spin-report';
+
 /**
  * Side-by-side figures of 2–6 variants with deltas against a chosen baseline. Pure and shared:
  * the compare screen and the CSV export build the same table. Values in SI units.
@@ -27,7 +29,10 @@ export interface Comparison {
   rows: ComparisonRow[];
 }
 
-type Getter = (r: Record<string, any>) => unknown;
+/** A stored report as read back: any engine version may have written it, so every field may be missing. */
+type DeepPartial<T> = T extends object ? { [K in keyof T]?: DeepPartial<T[K]> | null } : T;
+type StoredReport = DeepPartial<SpinReport>;
+type Getter = (r: StoredReport) => unknown;
 const ROWS: { key: string; label: string; unit: string; get: Getter }[] = [
   { key: 'verdict', label: 'Verdict', unit: 'text', get: (r) => r.spin?.verdict },
   { key: 'nearestAxis', label: 'Nearest principal axis', unit: 'text', get: (r) => r.spin?.nearestAxis },
@@ -54,10 +59,13 @@ export function buildComparison(variants: ComparedVariant[], baselineId?: string
   if (variants.length < 2 || variants.length > 6) throw new RangeError('compare 2 to 6 variants');
   const baselineIndex = baselineId ? variants.findIndex((v) => v.id === baselineId) : 0;
   if (baselineIndex < 0) throw new RangeError('the baseline must be one of the compared variants');
-  const reports = variants.map((v) => (v.report && typeof v.report === 'object' ? (v.report as Record<string, any>) : {}));
+  const reports = variants.map((v) => (v.report && typeof v.report === 'object' ? (v.report as StoredReport) : {}));
   const rows = ROWS.map(({ key, label, unit, get }) => {
     if (unit === 'text') {
-      const values = reports.map((r) => { const v = get(r); return typeof v === 'string' ? v : null; });
+      const values = reports.map((r) => {
+        const v = get(r);
+        return typeof v === 'string' ? v : null;
+      });
       return { key, label, unit, values, deltas: values.map(() => null), relativeDeltas: values.map(() => null) };
     }
     const values = reports.map((r) => numberOrNull(get(r)));
@@ -78,7 +86,11 @@ const csvCell = (v: unknown) => {
 
 /** The comparison as CSV: one row per figure, a value and a delta column per variant. */
 export function comparisonCsv(c: Comparison): string {
-  const header = ['figure', 'unit', ...c.variants.flatMap((v, i) => [v.label, i === c.baselineIndex ? `${v.label} (baseline) delta` : `${v.label} delta`])];
+  const header = [
+    'figure',
+    'unit',
+    ...c.variants.flatMap((v, i) => [v.label, i === c.baselineIndex ? `${v.label} (baseline) delta` : `${v.label} delta`]),
+  ];
   const lines = [header, ...c.rows.map((r) => [r.label, r.unit === 'text' ? '' : r.unit, ...r.values.flatMap((v, i) => [v, r.deltas[i]])])];
   return lines.map((l) => l.map(csvCell).join(',')).join('\r\n') + '\r\n';
 }

@@ -6,7 +6,13 @@ export type { SpinReport } from './report/spin-report';
 export { STANDARD_NOTES } from './report/report-notes';
 export { validatePartDocument, type PartValidation } from './part/validate-part-document';
 export { EngineInputError, type InputIssue } from './part/engine-input-error';
-export { partMassProperties, type PartMassProperties, type PartResolvers, type ResolvedMaterial, type ResolvedMesh } from './part/part-mass-properties';
+export {
+  partMassProperties,
+  type PartMassProperties,
+  type PartResolvers,
+  type ResolvedMaterial,
+  type ResolvedMesh,
+} from './part/part-mass-properties';
 export type { Body } from './composition/body';
 export { principalAxes, EQUAL_MOMENTS_ANALYTIC, EQUAL_MOMENTS_MESH, type PrincipalAxes } from './principal/principal-axes';
 export { jacobiEigen } from './principal/jacobi';
@@ -15,7 +21,14 @@ export { DEFAULT_VERDICT_THRESHOLDS, type Verdict, type VerdictThresholds } from
 export { intermediateGrowthRate } from './spin/growth-rate';
 export { wobbleFrequency } from './spin/wobble-frequency';
 export { momentAboutLine } from './trade/moment-about-line';
-export { tradeFigures, radiusOfGyration, SWINGWEIGHT_DISTANCE, BAT_PIVOT_DISTANCE, type TradeFigures, type GripFrame } from './trade/trade-figures';
+export {
+  tradeFigures,
+  radiusOfGyration,
+  SWINGWEIGHT_DISTANCE,
+  BAT_PIVOT_DISTANCE,
+  type TradeFigures,
+  type GripFrame,
+} from './trade/trade-figures';
 export type { CategoryCheck } from './checks/category-check';
 export { DISPLAY_UNITS, toDisplay, fromDisplay, convertUnits, type Quantity, type DisplayUnit } from './units/display-units';
 export { completeEllipticK } from './motion/complete-elliptic-k';
@@ -32,7 +45,15 @@ export { weldVertices } from './mesh/weld-vertices';
 export { integrateTriangleSoup, integrateIndexedMesh } from './mesh/integrate-mesh';
 export type { Solid } from './primitives/solid';
 export { compoundPendulumMoment, trifilarMoment, STANDARD_GRAVITY } from './trade/measured-moments';
-export { runScatterStudy, scatterInputSchema, MAX_SCATTER_SAMPLES, type ScatterInput, type ScatterResult, type ScatterProgress, type Sensitivity } from './scatter/scatter-study';
+export {
+  runScatterStudy,
+  scatterInputSchema,
+  MAX_SCATTER_SAMPLES,
+  type ScatterInput,
+  type ScatterResult,
+  type ScatterProgress,
+  type Sensitivity,
+} from './scatter/scatter-study';
 export type { Distribution } from './scatter/summarize';
 export { SeededRandom } from './scatter/seeded-random';
 export { DEFAULT_TOLERANCE } from './scatter/part-model';

@@ -62,10 +62,15 @@ export const errorBodySchema = z.object({
     code: z.string(),
     message: z.string(),
     field: z.string().optional(),
-    problems: z.array(z.object({
-      line: z.number().int().nullable().describe('line of the file, 1 = the header; null for the file as a whole'),
-      message: z.string(),
-    })).optional().describe('every problem found in an uploaded file (CSV import), when there are several'),
+    problems: z
+      .array(
+        z.object({
+          line: z.number().int().nullable().describe('line of the file, 1 = the header; null for the file as a whole'),
+          message: z.string(),
+        }),
+      )
+      .optional()
+      .describe('every problem found in an uploaded file (CSV import), when there are several'),
   }),
 }) satisfies z.ZodType<ErrorBody>;
 

@@ -3,7 +3,19 @@ import { isErrorBody } from './error-body';
 describe('isErrorBody', () => {
   it('accepts the error body with and without problems', () => {
     expect(isErrorBody({ error: { code: 'invalid_input', message: 'Bad.' } })).toBe(true);
-    expect(isErrorBody({ error: { code: 'invalid_input', message: 'Bad.', field: 'file', problems: [{ line: 2, message: 'x' }, { line: null, message: 'y' }] } })).toBe(true);
+    expect(
+      isErrorBody({
+        error: {
+          code: 'invalid_input',
+          message: 'Bad.',
+          field: 'file',
+          problems: [
+            { line: 2, message: 'x' },
+            { line: null, message: 'y' },
+          ],
+        },
+      }),
+    ).toBe(true);
   });
 
   it('refuses a body whose problems are not a list of { line, message }', () => {

@@ -11,14 +11,23 @@ export interface ErrorBody {
 
 function isProblem(value: unknown): value is ErrorProblem {
   const p = value as Record<string, unknown> | null;
-  return typeof p === 'object' && p !== null && typeof p.message === 'string'
-    && (p.line === null || (typeof p.line === 'number' && Number.isInteger(p.line)));
+  return (
+    typeof p === 'object' &&
+    p !== null &&
+    typeof p.message === 'string' &&
+    (p.line === null || (typeof p.line === 'number' && Number.isInteger(p.line)))
+  );
 }
 
 /** True when `value` has the shape of our error body. */
 export function isErrorBody(value: unknown): value is ErrorBody {
   const error = (value as { error?: unknown } | null)?.error as Record<string, unknown> | undefined;
-  return typeof error === 'object' && error !== null && typeof error.code === 'string' && typeof error.message === 'string'
-    && (error.field === undefined || typeof error.field === 'string')
-    && (error.problems === undefined || (Array.isArray(error.problems) && error.problems.every(isProblem)));
+  return (
+    typeof error === 'object' &&
+    error !== null &&
+    typeof error.code === 'string' &&
+    typeof error.message === 'string' &&
+    (error.field === undefined || typeof error.field === 'string') &&
+    (error.problems === undefined || (Array.isArray(error.problems) && error.problems.every(isProblem)))
+  );
 }

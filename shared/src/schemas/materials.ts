@@ -16,13 +16,24 @@ export const materialSchema = z.object({
 });
 export type Material = z.infer<typeof materialSchema>;
 
-const text = (max: number) => z.string({ message: 'is required' }).trim().min(1, { message: 'is required' }).max(max, { message: `must be at most ${max} characters` });
+const text = (max: number) =>
+  z
+    .string({ message: 'is required' })
+    .trim()
+    .min(1, { message: 'is required' })
+    .max(max, { message: `must be at most ${max} characters` });
 
 export const materialBodySchema = z.strictObject({
   name: text(120),
   family: z.enum(MATERIAL_FAMILIES, { message: `must be one of ${MATERIAL_FAMILIES.join(', ')}` }),
-  density: z.number({ message: 'must be a number (kg/m³)' }).positive({ message: 'must be greater than zero' }).max(25_000, { message: 'must be at most 25000 kg/m³' }),
-  densityTolerance: z.number({ message: 'must be a number' }).min(0, { message: 'must not be negative' }).max(0.5, { message: 'must be at most 0.5 (±50 %)' }),
+  density: z
+    .number({ message: 'must be a number (kg/m³)' })
+    .positive({ message: 'must be greater than zero' })
+    .max(25_000, { message: 'must be at most 25000 kg/m³' }),
+  densityTolerance: z
+    .number({ message: 'must be a number' })
+    .min(0, { message: 'must not be negative' })
+    .max(0.5, { message: 'must be at most 0.5 (±50 %)' }),
   source: text(300),
 });
 export type MaterialBody = z.infer<typeof materialBodySchema>;

@@ -11,7 +11,9 @@ export const measurementSchema = z.object({
   method: z.string(),
   predicted: z.number().nullable().describe('the variant’s predicted moment about that axis (kg·m²), when the axis is recognised'),
   differencePercent: z.number().nullable(),
-  importId: idSchema.nullable().describe('the CSV import the row came in with (rows of one file share it); null for rows recorded before imports were tracked'),
+  importId: idSchema
+    .nullable()
+    .describe('the CSV import the row came in with (rows of one file share it); null for rows recorded before imports were tracked'),
   createdAt: timestampSchema,
 });
 export type Measurement = z.infer<typeof measurementSchema>;
@@ -24,10 +26,22 @@ export type MeasurementsRemoved = z.infer<typeof measurementsRemovedSchema>;
 export const MEASUREMENT_CSV_COLUMNS = ['axis', 'value', 'unit', 'method'] as const;
 /** Units accepted in the `unit` column: the display labels and their plain-ASCII spellings. */
 export const MEASUREMENT_UNITS: Record<string, 'kg·m²' | 'kg·cm²' | 'g·cm²' | 'oz·in²'> = {
-  'kg·m²': 'kg·m²', 'kg*m^2': 'kg·m²', 'kg m^2': 'kg·m²', 'kgm2': 'kg·m²',
-  'kg·cm²': 'kg·cm²', 'kg*cm^2': 'kg·cm²', 'kg cm^2': 'kg·cm²', 'kgcm2': 'kg·cm²',
-  'g·cm²': 'g·cm²', 'g*cm^2': 'g·cm²', 'g cm^2': 'g·cm²', 'gcm2': 'g·cm²',
-  'oz·in²': 'oz·in²', 'oz*in^2': 'oz·in²', 'oz in^2': 'oz·in²', 'ozin2': 'oz·in²',
+  'kg·m²': 'kg·m²',
+  'kg*m^2': 'kg·m²',
+  'kg m^2': 'kg·m²',
+  kgm2: 'kg·m²',
+  'kg·cm²': 'kg·cm²',
+  'kg*cm^2': 'kg·cm²',
+  'kg cm^2': 'kg·cm²',
+  kgcm2: 'kg·cm²',
+  'g·cm²': 'g·cm²',
+  'g*cm^2': 'g·cm²',
+  'g cm^2': 'g·cm²',
+  gcm2: 'g·cm²',
+  'oz·in²': 'oz·in²',
+  'oz*in^2': 'oz·in²',
+  'oz in^2': 'oz·in²',
+  ozin2: 'oz·in²',
 };
 
 /** Axis words recognised for the predicted value; anything else is stored with no prediction. */

@@ -76,7 +76,11 @@ export const auditEventSchema = z.object({
 export type AuditEvent = z.infer<typeof auditEventSchema>;
 
 export const auditQuerySchema = pageQuerySchema.extend({
-  action: z.string().max(80).regex(/^[a-z_.]+$/, { message: 'must be an action name' }).optional(),
+  action: z
+    .string()
+    .max(80)
+    .regex(/^[a-z_.]+$/, { message: 'must be an action name' })
+    .optional(),
   actor: idSchema.optional(),
   from: z.iso.datetime({ message: 'must be an ISO date-time', offset: true }).optional(),
   to: z.iso.datetime({ message: 'must be an ISO date-time', offset: true }).optional(),

@@ -34,11 +34,19 @@ export type MeshUsage = z.infer<typeof meshUsageSchema>;
 /** Why a mesh in use cannot be deleted, naming where it is used (the first three parts); the server's 409 and the designer app say the same. */
 export function meshInUseMessage(meshName: string, usage: MeshUsage): string {
   const shown = usage.parts.slice(0, 3).map((u) => {
-    const where = [u.inDraft ? 'its draft' : '', u.variantNumbers.length ? `saved ${u.variantNumbers.length === 1 ? 'variant' : 'variants'} ${u.variantNumbers.map((n) => `v${n}`).join(', ')}` : '']
-      .filter(Boolean).join(' and ');
+    const where = [
+      u.inDraft ? 'its draft' : '',
+      u.variantNumbers.length
+        ? `saved ${u.variantNumbers.length === 1 ? 'variant' : 'variants'} ${u.variantNumbers.map((n) => `v${n}`).join(', ')}`
+        : '',
+    ]
+      .filter(Boolean)
+      .join(' and ');
     return `${u.partName} (${where})`;
   });
   const more = usage.parts.length - shown.length;
-  return `The mesh “${meshName}” is still used by ${shown.join('; ')}${more > 0 ? ` and ${more} more ${more === 1 ? 'part' : 'parts'}` : ''}, so it cannot be deleted. `
-    + 'Remove it from those drafts, or delete those parts; a saved variant keeps the mesh it was computed from.';
+  return (
+    `The mesh “${meshName}” is still used by ${shown.join('; ')}${more > 0 ? ` and ${more} more ${more === 1 ? 'part' : 'parts'}` : ''}, so it cannot be deleted. ` +
+    'Remove it from those drafts, or delete those parts; a saved variant keeps the mesh it was computed from.'
+  );
 }

@@ -33,7 +33,8 @@ export const vec3Schema = z.tuple([num(), num(), num()], { error: 'must be three
 export const unitVec3Schema = vec3Schema.superRefine((v, ctx) => {
   const l = Math.hypot(v[0], v[1], v[2]);
   if (l === 0) ctx.addIssue({ code: 'custom', message: 'must not be the zero vector' });
-  else if (Math.abs(l - 1) > UNIT_AXIS_TOLERANCE) ctx.addIssue({ code: 'custom', message: `must be a unit vector (its length is ${l.toPrecision(6)})` });
+  else if (Math.abs(l - 1) > UNIT_AXIS_TOLERANCE)
+    ctx.addIssue({ code: 'custom', message: `must be a unit vector (its length is ${l.toPrecision(6)})` });
 });
 
 const positiveTriple = z.tuple([positive(), positive(), positive()], { error: 'must be three positive numbers' });
@@ -57,8 +58,20 @@ const common = {
 };
 
 const boxSchema = z.strictObject({ ...common, shape: z.literal('box'), size: positiveTriple, wall: positive().optional() });
-const cylinderSchema = z.strictObject({ ...common, shape: z.literal('cylinder'), radius: positive(), length: positive(), innerRadius: positive().optional() });
-const coneSchema = z.strictObject({ ...common, shape: z.literal('cone'), radius: positive(), length: positive(), topRadius: nonNegative().optional() });
+const cylinderSchema = z.strictObject({
+  ...common,
+  shape: z.literal('cylinder'),
+  radius: positive(),
+  length: positive(),
+  innerRadius: positive().optional(),
+});
+const coneSchema = z.strictObject({
+  ...common,
+  shape: z.literal('cone'),
+  radius: positive(),
+  length: positive(),
+  topRadius: nonNegative().optional(),
+});
 const sphereSchema = z.strictObject({ ...common, shape: z.literal('sphere'), radius: positive(), innerRadius: positive().optional() });
 const ellipsoidSchema = z.strictObject({ ...common, shape: z.literal('ellipsoid'), semiAxes: positiveTriple });
 const torusSchema = z.strictObject({ ...common, shape: z.literal('torus'), majorRadius: positive(), minorRadius: positive() });
@@ -68,7 +81,10 @@ const meshSchema = z.strictObject({
   ...common,
   shape: z.literal('mesh'),
   meshId: z.string({ error: 'must be a text id' }).min(1).max(64).optional(),
-  vertices: z.array(vec3Schema, { error: 'must be a list of [x, y, z]' }).max(MAX_INLINE_MESH_VERTICES, { error: `must have at most ${MAX_INLINE_MESH_VERTICES} vertices` }).optional(),
+  vertices: z
+    .array(vec3Schema, { error: 'must be a list of [x, y, z]' })
+    .max(MAX_INLINE_MESH_VERTICES, { error: `must have at most ${MAX_INLINE_MESH_VERTICES} vertices` })
+    .optional(),
   triangles: z
     .array(z.tuple([z.int(), z.int(), z.int()], { error: 'must be three vertex indices' }), { error: 'must be a list of [i, j, k]' })
     .max(MAX_INLINE_MESH_TRIANGLES, { error: `must have at most ${MAX_INLINE_MESH_TRIANGLES} triangles` })
@@ -82,34 +98,48 @@ export const PRIMITIVE_SHAPES: readonly string[] = SHAPES;
 
 /** One primitive: shape, placement, material and mode. */
 export const primitiveSchema = z
-  .discriminatedUnion('shape', [boxSchema, cylinderSchema, coneSchema, sphereSchema, ellipsoidSchema, torusSchema, capsuleSchema, pointSchema, meshSchema], {
-    error: (iss) => (iss.code === 'invalid_union' ? `must be one of ${SHAPES.join(', ')}` : undefined),
-  })
+  .discriminatedUnion(
+    'shape',
+    [boxSchema, cylinderSchema, coneSchema, sphereSchema, ellipsoidSchema, torusSchema, capsuleSchema, pointSchema, meshSchema],
+    {
+      error: (iss) => (iss.code === 'invalid_union' ? `must be one of ${SHAPES.join(', ')}` : undefined),
+    },
+  )
   .superRefine((p, ctx) => {
     const given = (['density', 'materialId', 'mass'] as const).filter((k) => p[k] !== undefined);
     if (p.shape === 'point') {
       if (p.mass === undefined) ctx.addIssue({ code: 'custom', path: ['mass'], message: 'is required for a point mass' });
-      for (const k of given) if (k !== 'mass') ctx.addIssue({ code: 'custom', path: [k], message: 'does not apply to a point mass (give its mass)' });
+      for (const k of given)
+        if (k !== 'mass') ctx.addIssue({ code: 'custom', path: [k], message: 'does not apply to a point mass (give its mass)' });
     } else if (given.length === 0) {
       ctx.addIssue({ code: 'custom', path: ['density'], message: 'is required (or give materialId or mass)' });
     } else if (given.length > 1) {
-      ctx.addIssue({ code: 'custom', path: [given[1]], message: `conflicts with ${given[0]}: give exactly one of density, materialId, mass` });
+      ctx.addIssue({
+        code: 'custom',
+        path: [given[1]],
+        message: `conflicts with ${given[0]}: give exactly one of density, materialId, mass`,
+      });
     }
     switch (p.shape) {
       case 'box':
-        if (p.wall !== undefined && 2 * p.wall >= Math.min(...p.size)) ctx.addIssue({ code: 'custom', path: ['wall'], message: 'must be less than half the smallest edge of size' });
+        if (p.wall !== undefined && 2 * p.wall >= Math.min(...p.size))
+          ctx.addIssue({ code: 'custom', path: ['wall'], message: 'must be less than half the smallest edge of size' });
         break;
       case 'cylinder':
       case 'sphere':
-        if (p.innerRadius !== undefined && p.innerRadius >= p.radius) ctx.addIssue({ code: 'custom', path: ['innerRadius'], message: 'must be less than radius' });
+        if (p.innerRadius !== undefined && p.innerRadius >= p.radius)
+          ctx.addIssue({ code: 'custom', path: ['innerRadius'], message: 'must be less than radius' });
         break;
       case 'torus':
-        if (p.minorRadius >= p.majorRadius) ctx.addIssue({ code: 'custom', path: ['minorRadius'], message: 'must be less than majorRadius' });
+        if (p.minorRadius >= p.majorRadius)
+          ctx.addIssue({ code: 'custom', path: ['minorRadius'], message: 'must be less than majorRadius' });
         break;
       case 'mesh': {
         const inline = p.vertices !== undefined || p.triangles !== undefined;
-        if (p.meshId !== undefined && inline) ctx.addIssue({ code: 'custom', path: ['meshId'], message: 'give either meshId or inline vertices and triangles, not both' });
-        else if (p.meshId === undefined && !inline) ctx.addIssue({ code: 'custom', path: ['meshId'], message: 'is required (or give inline vertices and triangles)' });
+        if (p.meshId !== undefined && inline)
+          ctx.addIssue({ code: 'custom', path: ['meshId'], message: 'give either meshId or inline vertices and triangles, not both' });
+        else if (p.meshId === undefined && !inline)
+          ctx.addIssue({ code: 'custom', path: ['meshId'], message: 'is required (or give inline vertices and triangles)' });
         else if (inline) {
           if (!p.vertices) ctx.addIssue({ code: 'custom', path: ['vertices'], message: 'is required with triangles' });
           else if (!p.triangles) ctx.addIssue({ code: 'custom', path: ['triangles'], message: 'is required with vertices' });
@@ -161,7 +191,12 @@ export const gripSchema = z
 /** The whole part document. */
 export const partDocumentSchema = z
   .object({
-    name: z.string({ error: 'must be text' }).trim().min(1, { error: 'is required' }).max(200, { error: 'must be at most 200 characters' }).optional(),
+    name: z
+      .string({ error: 'must be text' })
+      .trim()
+      .min(1, { error: 'is required' })
+      .max(200, { error: 'must be at most 200 characters' })
+      .optional(),
     category: gearCategorySchema.optional(),
     /** Which implement class the category checks use where the rules have more than one (javelin). */
     division: z.enum(['men', 'women'], { error: 'must be "men" or "women"' }).optional(),
@@ -176,10 +211,12 @@ export const partDocumentSchema = z
   .superRefine((doc, ctx) => {
     const seen = new Map<string, number>();
     doc.primitives.forEach((p, i) => {
-      if (seen.has(p.id)) ctx.addIssue({ code: 'custom', path: ['primitives', i, 'id'], message: `repeats the id of primitives[${seen.get(p.id)}]` });
+      if (seen.has(p.id))
+        ctx.addIssue({ code: 'custom', path: ['primitives', i, 'id'], message: `repeats the id of primitives[${seen.get(p.id)}]` });
       else seen.set(p.id, i);
     });
-    if (!doc.primitives.some((p) => p.mode === 'add')) ctx.addIssue({ code: 'custom', path: ['primitives'], message: 'must hold at least one primitive with mode "add"' });
+    if (!doc.primitives.some((p) => p.mode === 'add'))
+      ctx.addIssue({ code: 'custom', path: ['primitives'], message: 'must hold at least one primitive with mode "add"' });
   });
 
 /** A validated part document, defaults filled in. */

@@ -22,14 +22,20 @@ export const partSchema = z.object({
   draft: z.unknown(),
   /** Optimistic-locking counter of the draft: send it back with every save. */
   draftVersion: z.number().int(),
-  latestVariant: z.object({ id: idSchema, number: z.number().int(), status: variantStatusSchema, summary: verdictSummarySchema.nullable() }).nullable(),
+  latestVariant: z
+    .object({ id: idSchema, number: z.number().int(), status: variantStatusSchema, summary: verdictSummarySchema.nullable() })
+    .nullable(),
   variantCount: z.number().int(),
   createdAt: timestampSchema,
   updatedAt: timestampSchema,
 });
 export type Part = z.infer<typeof partSchema>;
 
-const name = z.string({ message: 'is required' }).trim().min(1, { message: 'is required' }).max(120, { message: 'must be at most 120 characters' });
+const name = z
+  .string({ message: 'is required' })
+  .trim()
+  .min(1, { message: 'is required' })
+  .max(120, { message: 'must be at most 120 characters' });
 
 export const createPartBodySchema = z.strictObject({ name, draft: z.unknown().optional() });
 export const savePartDraftBodySchema = z.strictObject({

@@ -16,7 +16,11 @@ export type ReviewEntry = z.infer<typeof reviewEntrySchema>;
 export const reviewThreadSchema = z.object({ status: variantStatusSchema, entries: z.array(reviewEntrySchema) });
 export type ReviewThread = z.infer<typeof reviewThreadSchema>;
 
-const body = z.string({ message: 'is required' }).trim().min(1, { message: 'is required' }).max(5000, { message: 'must be at most 5000 characters' });
+const body = z
+  .string({ message: 'is required' })
+  .trim()
+  .min(1, { message: 'is required' })
+  .max(5000, { message: 'must be at most 5000 characters' });
 
 export const requestReviewBodySchema = z.strictObject({ reviewerId: idSchema, message: z.string().trim().max(5000).optional() });
 export const reviewCommentBodySchema = z.strictObject({ body });

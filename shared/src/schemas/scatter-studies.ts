@@ -18,14 +18,30 @@ export const scatterStudySchema = z.object({
 });
 export type ScatterStudy = z.infer<typeof scatterStudySchema>;
 
-export const startScatterBodySchema = z.strictObject({
-  variantId: idSchema.optional(),
-  part: z.unknown().optional(),
-  /** Per primitive id: relative density scatter and absolute size scatter (m). */
-  tolerances: z.record(z.string(), z.strictObject({
-    density: z.number().min(0).max(0.5).optional(),
-    size: z.number().min(0).max(0.05).optional(),
-  })).optional(),
-  samples: z.number({ message: 'must be a number' }).int({ message: 'must be a whole number' }).min(10, { message: 'must be at least 10' }).max(20_000, { message: 'must be at most 20000' }),
-  seed: z.number().int().min(0).max(2 ** 31 - 1).optional(),
-}).refine((b) => (b.variantId === undefined) !== (b.part === undefined), { message: 'give either variantId or part', path: ['variantId'] });
+export const startScatterBodySchema = z
+  .strictObject({
+    variantId: idSchema.optional(),
+    part: z.unknown().optional(),
+    /** Per primitive id: relative density scatter and absolute size scatter (m). */
+    tolerances: z
+      .record(
+        z.string(),
+        z.strictObject({
+          density: z.number().min(0).max(0.5).optional(),
+          size: z.number().min(0).max(0.05).optional(),
+        }),
+      )
+      .optional(),
+    samples: z
+      .number({ message: 'must be a number' })
+      .int({ message: 'must be a whole number' })
+      .min(10, { message: 'must be at least 10' })
+      .max(20_000, { message: 'must be at most 20000' }),
+    seed: z
+      .number()
+      .int()
+      .min(0)
+      .max(2 ** 31 - 1)
+      .optional(),
+  })
+  .refine((b) => (b.variantId === undefined) !== (b.part === undefined), { message: 'give either variantId or part', path: ['variantId'] });

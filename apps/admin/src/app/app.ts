@@ -31,8 +31,10 @@ export class App {
     const role = this.workspace.role();
     const links: ShellLink[] = [];
     if (can(role, 'members.manage')) links.push({ label: 'Members', path: '/members', icon: 'group', testId: 'nav-members' });
-    if (can(role, 'invitations.manage')) links.push({ label: 'Invitations', path: '/invitations', icon: 'mail', testId: 'nav-invitations' });
-    if (can(role, 'billing.read')) links.push({ label: 'Subscription', path: '/subscription', icon: 'payments', testId: 'nav-subscription' });
+    if (can(role, 'invitations.manage'))
+      links.push({ label: 'Invitations', path: '/invitations', icon: 'mail', testId: 'nav-invitations' });
+    if (can(role, 'billing.read'))
+      links.push({ label: 'Subscription', path: '/subscription', icon: 'payments', testId: 'nav-subscription' });
     if (can(role, 'billing.read')) links.push({ label: 'Invoices', path: '/invoices', icon: 'receipt_long', testId: 'nav-invoices' });
     if (can(role, 'materials.manage')) links.push({ label: 'Materials', path: '/materials', icon: 'category', testId: 'nav-materials' });
     if (can(role, 'settings.manage')) links.push({ label: 'Settings', path: '/settings', icon: 'tune', testId: 'nav-settings' });

@@ -42,16 +42,14 @@ export class AuthApi {
    */
   refresh(): Observable<Session> {
     if (!this.refreshInFlight) {
-      this.refreshInFlight = this.http
-        .post<Session>(`${this.base}/auth/refresh`, null, { context: skipRefreshContext() })
-        .pipe(
-          tap({
-            next: (session) => this.adopt(session),
-            error: () => this.state.clear(),
-          }),
-          finalize(() => (this.refreshInFlight = null)),
-          shareReplay({ bufferSize: 1, refCount: false }),
-        );
+      this.refreshInFlight = this.http.post<Session>(`${this.base}/auth/refresh`, null, { context: skipRefreshContext() }).pipe(
+        tap({
+          next: (session) => this.adopt(session),
+          error: () => this.state.clear(),
+        }),
+        finalize(() => (this.refreshInFlight = null)),
+        shareReplay({ bufferSize: 1, refCount: false }),
+      );
     }
     return this.refreshInFlight;
   }

@@ -117,7 +117,10 @@ describe('authInterceptor', () => {
       .subscribe({ error: (e) => (failure = e) });
     backend
       .expectOne('/api/v1/auth/signin')
-      .flush({ error: { code: 'invalid_credentials', message: 'E-mail or password is wrong.' } }, { status: 401, statusText: 'Unauthorized' });
+      .flush(
+        { error: { code: 'invalid_credentials', message: 'E-mail or password is wrong.' } },
+        { status: 401, statusText: 'Unauthorized' },
+      );
     backend.expectNone('/api/v1/auth/refresh');
     expect((failure as ApiError).code).toBe('invalid_credentials');
   });

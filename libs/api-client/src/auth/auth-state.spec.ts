@@ -47,7 +47,10 @@ describe('AuthState', () => {
 
   it('keeps the token out of web storage', () => {
     state.setSession(sessionFixture({ accessToken: 'secret-token-value' }));
-    const stored = Object.keys(localStorage).map((k) => localStorage.getItem(k)).join(' ') + Object.keys(sessionStorage).join(' ');
+    const stored =
+      Object.keys(localStorage)
+        .map((k) => localStorage.getItem(k))
+        .join(' ') + Object.keys(sessionStorage).join(' ');
     expect(stored).not.toContain('secret-token-value');
   });
 });
@@ -70,7 +73,14 @@ describe('AuthApi', () => {
   afterEach(() => backend.verify());
 
   it('stores the session of a sign-up and opens the new workspace', () => {
-    api.signUp({ workspaceName: 'Ridgeline Throwing Club', name: 'Mira Okafor', email: 'mira.okafor@example.test', password: 'long enough secret' }).subscribe();
+    api
+      .signUp({
+        workspaceName: 'Ridgeline Throwing Club',
+        name: 'Mira Okafor',
+        email: 'mira.okafor@example.test',
+        password: 'long enough secret',
+      })
+      .subscribe();
     const call = backend.expectOne('/api/v1/auth/signup');
     expect(call.request.method).toBe('POST');
     expect(call.request.body).toMatchObject({ workspaceName: 'Ridgeline Throwing Club', email: 'mira.okafor@example.test' });

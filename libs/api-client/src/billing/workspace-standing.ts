@@ -34,12 +34,23 @@ export class WorkspaceStandings {
       suspendedReason: workspace.suspendedReason ?? null,
     };
     const learnt = this.known()[workspace.id];
-    return learnt ? { ...fromMembership, ...learnt, readOnlyFrom: learnt.readOnlyFrom ?? fromMembership.readOnlyFrom, suspendedReason: learnt.suspendedReason ?? fromMembership.suspendedReason } : fromMembership;
+    return learnt
+      ? {
+          ...fromMembership,
+          ...learnt,
+          readOnlyFrom: learnt.readOnlyFrom ?? fromMembership.readOnlyFrom,
+          suspendedReason: learnt.suspendedReason ?? fromMembership.suspendedReason,
+        }
+      : fromMembership;
   });
 
   /** Records the state a billing answer gives for `workspaceId`. */
   noteBilling(workspaceId: string, billing: Pick<Billing, 'workspaceState' | 'readOnlyFrom'> & StandingFields): void {
-    this.note(workspaceId, { state: billing.workspaceState, readOnlyFrom: billing.readOnlyFrom, suspendedReason: billing.suspendedReason ?? null });
+    this.note(workspaceId, {
+      state: billing.workspaceState,
+      readOnlyFrom: billing.readOnlyFrom,
+      suspendedReason: billing.suspendedReason ?? null,
+    });
   }
 
   /** Records what is now known about `workspaceId`'s standing. */

@@ -69,5 +69,7 @@ async function errorOf(response: Response): Promise<ApiError> {
   } catch {
     // Not JSON: the status's own message follows.
   }
-  return ApiError.fromHttpError(new HttpErrorResponse({ status: response.status, error: isErrorBody(body) ? body : null, headers: undefined }));
+  return ApiError.fromHttpError(
+    new HttpErrorResponse({ status: response.status, error: isErrorBody(body) ? body : null, headers: undefined }),
+  );
 }

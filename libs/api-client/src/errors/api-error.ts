@@ -28,7 +28,14 @@ export class ApiError extends Error {
     const retryAfterSeconds = parseRetryAfter(response.headers?.get('Retry-After'));
     if (isErrorBody(response.error)) {
       const { code, message, field, problems } = response.error.error;
-      return new ApiError(response.status, code, withRetryHint(message, response.status, retryAfterSeconds), field, retryAfterSeconds, problems ?? []);
+      return new ApiError(
+        response.status,
+        code,
+        withRetryHint(message, response.status, retryAfterSeconds),
+        field,
+        retryAfterSeconds,
+        problems ?? [],
+      );
     }
     return new ApiError(
       response.status,
@@ -70,27 +77,44 @@ function withRetryHint(message: string, status: number, retryAfterSeconds: numbe
 
 function fallbackCode(status: number): string {
   switch (status) {
-    case 400: return 'bad_request';
-    case 401: return 'unauthorized';
-    case 403: return 'forbidden';
-    case 404: return 'not_found';
-    case 409: return 'conflict';
-    case 410: return 'gone';
-    case 429: return 'too_many_requests';
-    default: return status >= 500 ? 'server_error' : 'http_error';
+    case 400:
+      return 'bad_request';
+    case 401:
+      return 'unauthorized';
+    case 403:
+      return 'forbidden';
+    case 404:
+      return 'not_found';
+    case 409:
+      return 'conflict';
+    case 410:
+      return 'gone';
+    case 429:
+      return 'too_many_requests';
+    default:
+      return status >= 500 ? 'server_error' : 'http_error';
   }
 }
 
 function fallbackMessage(status: number): string {
   switch (status) {
-    case 400: return 'The request was not accepted.';
-    case 401: return 'Please sign in again.';
-    case 403: return 'Your role does not allow this.';
-    case 404: return 'Not found.';
-    case 409: return 'This conflicts with the current state. Reload and try again.';
-    case 410: return 'This link has expired or was already used.';
-    case 429: return 'Too many attempts.';
-    case 503: return 'The service is temporarily unavailable. Try again shortly.';
-    default: return status >= 500 ? 'The server ran into a problem. Try again shortly.' : 'The request failed.';
+    case 400:
+      return 'The request was not accepted.';
+    case 401:
+      return 'Please sign in again.';
+    case 403:
+      return 'Your role does not allow this.';
+    case 404:
+      return 'Not found.';
+    case 409:
+      return 'This conflicts with the current state. Reload and try again.';
+    case 410:
+      return 'This link has expired or was already used.';
+    case 429:
+      return 'Too many attempts.';
+    case 503:
+      return 'The service is temporarily unavailable. Try again shortly.';
+    default:
+      return status >= 500 ? 'The server ran into a problem. Try again shortly.' : 'The request failed.';
   }
 }

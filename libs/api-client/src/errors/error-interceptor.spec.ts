@@ -33,13 +33,31 @@ describe('errorInterceptor', () => {
         { status: 409, statusText: 'Conflict' },
       ),
     );
-    expect(error).toMatchObject({ status: 409, code: 'email_taken', field: 'email', message: 'An account with this e-mail already exists.' });
+    expect(error).toMatchObject({
+      status: 409,
+      code: 'email_taken',
+      field: 'email',
+      message: 'An account with this e-mail already exists.',
+    });
   });
 
   it('carries the problems of a refused file, each with its line', () => {
-    const problems = [{ line: 3, message: 'value "-3" must be a positive number' }, { line: null, message: 'the file has 2 more problems' }];
+    const problems = [
+      { line: 3, message: 'value "-3" must be a positive number' },
+      { line: null, message: 'the file has 2 more problems' },
+    ];
     const error = failureOf('/api/v1/workspaces/w/variants/v/measurements', (call) =>
-      call.flush({ error: { code: 'invalid_input', message: 'The CSV was not imported: line 3: value "-3" must be a positive number.', field: 'file', problems } }, { status: 400, statusText: 'Bad Request' }),
+      call.flush(
+        {
+          error: {
+            code: 'invalid_input',
+            message: 'The CSV was not imported: line 3: value "-3" must be a positive number.',
+            field: 'file',
+            problems,
+          },
+        },
+        { status: 400, statusText: 'Bad Request' },
+      ),
     );
     expect(error).toMatchObject({ status: 400, code: 'invalid_input', field: 'file', problems });
   });
@@ -57,7 +75,10 @@ describe('errorInterceptor', () => {
 
   it('keeps the last-owner refusal readable', () => {
     const error = failureOf('/api/v1/workspaces/w/members/m', (call) =>
-      call.flush({ error: { code: 'last_owner', message: 'A workspace needs at least one owner.' } }, { status: 409, statusText: 'Conflict' }),
+      call.flush(
+        { error: { code: 'last_owner', message: 'A workspace needs at least one owner.' } },
+        { status: 409, statusText: 'Conflict' },
+      ),
     );
     expect(error.code).toBe('last_owner');
     expect(error.field).toBeUndefined();

@@ -8,8 +8,6 @@ import { ApiError } from './api-error';
 export const errorInterceptor: HttpInterceptorFn = (req, next) => {
   if (!isApiUrl(req.url, inject(API_BASE_URL))) return next(req);
   return next(req).pipe(
-    catchError((error: unknown) =>
-      throwError(() => (error instanceof HttpErrorResponse ? ApiError.fromHttpError(error) : error)),
-    ),
+    catchError((error: unknown) => throwError(() => (error instanceof HttpErrorResponse ? ApiError.fromHttpError(error) : error))),
   );
 };

@@ -46,9 +46,7 @@ export class InvitationsApi {
    * and `password` create the account. The answer is a session in the joined workspace.
    */
   accept(body: AcceptInvitationBody): Observable<Session> {
-    return this.http
-      .post<Session>(`${this.base}/invitations/accept`, body)
-      .pipe(tap((session) => this.authApi.adopt(session)));
+    return this.http.post<Session>(`${this.base}/invitations/accept`, body).pipe(tap((session) => this.authApi.adopt(session)));
   }
 
   private url(workspaceId: string): string {

@@ -13,8 +13,16 @@ const VARIANT_ID = '60000000-0000-4000-8000-000000000002';
 const IMPORT_ID = '80000000-0000-4000-8000-000000000001';
 const URL = `/api/v1/workspaces/${HARBOUR_WORKSPACE.id}/variants/${VARIANT_ID}/measurements`;
 const ROW: Measurement = {
-  id: '70000000-0000-4000-8000-000000000001', axis: 'major', value: 0.0123, enteredValue: 123000, enteredUnit: 'g·cm²', method: 'compound pendulum',
-  predicted: 0.012, differencePercent: 2.5, importId: '80000000-0000-4000-8000-000000000001', createdAt: '2026-11-30T10:00:00.000Z',
+  id: '70000000-0000-4000-8000-000000000001',
+  axis: 'major',
+  value: 0.0123,
+  enteredValue: 123000,
+  enteredUnit: 'g·cm²',
+  method: 'compound pendulum',
+  predicted: 0.012,
+  differencePercent: 2.5,
+  importId: '80000000-0000-4000-8000-000000000001',
+  createdAt: '2026-11-30T10:00:00.000Z',
 };
 
 describe('MeasurementsApi', () => {
@@ -41,7 +49,9 @@ describe('MeasurementsApi', () => {
     const steps: MeasurementUpload[] = [];
     let completed = false;
     const csv = new Blob(['axis,value,unit,method\nmajor,123000,g·cm²,compound pendulum\n'], { type: 'text/csv' });
-    api.upload(HARBOUR_WORKSPACE.id, VARIANT_ID, csv, 'rig-a.csv').subscribe({ next: (s) => steps.push(s), complete: () => (completed = true) });
+    api
+      .upload(HARBOUR_WORKSPACE.id, VARIANT_ID, csv, 'rig-a.csv')
+      .subscribe({ next: (s) => steps.push(s), complete: () => (completed = true) });
     const call = backend.expectOne(URL);
     expect(call.request.method).toBe('POST');
     expect(call.request.reportProgress).toBe(true);
@@ -69,7 +79,12 @@ describe('MeasurementsApi', () => {
       { line: 3, message: 'value "-3" must be a positive number' },
       { line: 4, message: 'unit "furlongs" must be one of kg·m², kg·cm², g·cm², oz·in² (or kg*m^2, g*cm^2, …)' },
     ];
-    backend.expectOne(URL).flush({ error: { code: 'invalid_input', message: 'The CSV was not imported: line 3: …', field: 'file', problems } }, { status: 400, statusText: 'Bad Request' });
+    backend
+      .expectOne(URL)
+      .flush(
+        { error: { code: 'invalid_input', message: 'The CSV was not imported: line 3: …', field: 'file', problems } },
+        { status: 400, statusText: 'Bad Request' },
+      );
     expect(failure).toBeInstanceOf(ApiError);
     expect(failure).toMatchObject({ status: 400, field: 'file', problems });
   });
@@ -95,7 +110,9 @@ describe('MeasurementsApi', () => {
   it('fails with a 404 when the import is gone', () => {
     let failure: unknown;
     api.removeImport(HARBOUR_WORKSPACE.id, VARIANT_ID, IMPORT_ID).subscribe({ error: (e) => (failure = e) });
-    backend.expectOne(`${URL}/imports/${IMPORT_ID}`).flush({ error: { code: 'not_found', message: 'Import was not found.' } }, { status: 404, statusText: 'Not Found' });
+    backend
+      .expectOne(`${URL}/imports/${IMPORT_ID}`)
+      .flush({ error: { code: 'not_found', message: 'Import was not found.' } }, { status: 404, statusText: 'Not Found' });
     expect(failure).toMatchObject({ status: 404, code: 'not_found', problems: [] });
   });
 });

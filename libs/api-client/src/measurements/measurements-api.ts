@@ -5,9 +5,7 @@ import { filter, map, Observable } from 'rxjs';
 import { API_BASE_URL } from '../api-base-url';
 
 /** One step of an upload: bytes on their way (fraction 0…1, null when the size is unknown), then the imported rows. */
-export type MeasurementUpload =
-  | { kind: 'progress'; fraction: number | null }
-  | { kind: 'done'; rows: Measurement[] };
+export type MeasurementUpload = { kind: 'progress'; fraction: number | null } | { kind: 'done'; rows: Measurement[] };
 
 /** Measured moments of a variant's prototype (pendulum rig) against its prediction (`/workspaces/:id/variants/:id/measurements`). */
 @Injectable({ providedIn: 'root' })

@@ -7,8 +7,14 @@ import { errorInterceptor } from '../errors/error-interceptor';
 import { MeshesApi, type MeshUploadEvent } from './meshes-api';
 
 const BLOCK: Mesh = {
-  id: '11111111-1111-4111-8111-111111111111', name: 'block.stl', sha256: 'a'.repeat(64), byteSize: 684, triangleCount: 12,
-  format: 'binary', report: { fixed: [], warnings: [] }, createdAt: '2026-03-01T10:00:00.000Z',
+  id: '11111111-1111-4111-8111-111111111111',
+  name: 'block.stl',
+  sha256: 'a'.repeat(64),
+  byteSize: 684,
+  triangleCount: 12,
+  format: 'binary',
+  report: { fixed: [], warnings: [] },
+  createdAt: '2026-03-01T10:00:00.000Z',
 };
 const WS = 'ws-1';
 
@@ -69,10 +75,12 @@ describe('MeshesApi', () => {
   it('fails with the server’s message and field when the check refuses the file', () => {
     let failure: unknown;
     api.upload(WS, new Blob(['x']), 'open.stl').subscribe({ error: (e) => (failure = e) });
-    backend.expectOne('/api/v1/workspaces/ws-1/meshes').flush(
-      { error: { code: 'mesh_invalid', message: 'The STL cannot be used: the mesh is not closed (4 boundary edges).', field: 'file' } },
-      { status: 422, statusText: 'Unprocessable Entity' },
-    );
+    backend
+      .expectOne('/api/v1/workspaces/ws-1/meshes')
+      .flush(
+        { error: { code: 'mesh_invalid', message: 'The STL cannot be used: the mesh is not closed (4 boundary edges).', field: 'file' } },
+        { status: 422, statusText: 'Unprocessable Entity' },
+      );
     expect(failure).toBeInstanceOf(ApiError);
     expect(failure).toMatchObject({ status: 422, code: 'mesh_invalid', field: 'file', message: expect.stringMatching(/not closed/) });
   });
@@ -85,7 +93,9 @@ describe('MeshesApi', () => {
     const geo = backend.expectOne(`/api/v1/workspaces/ws-1/meshes/${BLOCK.id}/geometry`);
     expect(geo.request.responseType).toBe('arraybuffer');
     geo.flush(new Uint8Array([1, 2, 3]).buffer);
-    backend.expectOne({ method: 'DELETE', url: `/api/v1/workspaces/ws-1/meshes/${BLOCK.id}` }).flush(null, { status: 204, statusText: 'No Content' });
+    backend
+      .expectOne({ method: 'DELETE', url: `/api/v1/workspaces/ws-1/meshes/${BLOCK.id}` })
+      .flush(null, { status: 204, statusText: 'No Content' });
     expect(Array.from(new Uint8Array(bytes!))).toEqual([1, 2, 3]);
     expect(deleted).toBe(true);
   });
@@ -93,13 +103,27 @@ describe('MeshesApi', () => {
   it('asks where a mesh is used, and fails a refused deletion with the server’s 409', () => {
     let usage: unknown;
     let failure: unknown;
-    const parts = [{ partId: '22222222-2222-4222-8222-222222222222', projectId: '33333333-3333-4333-8333-333333333333', partName: 'Head core', inDraft: true, variantNumbers: [1] }];
+    const parts = [
+      {
+        partId: '22222222-2222-4222-8222-222222222222',
+        projectId: '33333333-3333-4333-8333-333333333333',
+        partName: 'Head core',
+        inDraft: true,
+        variantNumbers: [1],
+      },
+    ];
     api.usage(WS, BLOCK.id).subscribe((u) => (usage = u));
     backend.expectOne({ method: 'GET', url: `/api/v1/workspaces/ws-1/meshes/${BLOCK.id}/usage` }).flush({ parts });
     expect(usage).toEqual({ parts });
     api.delete(WS, BLOCK.id).subscribe({ error: (e) => (failure = e) });
     backend.expectOne({ method: 'DELETE', url: `/api/v1/workspaces/ws-1/meshes/${BLOCK.id}` }).flush(
-      { error: { code: 'mesh_in_use', message: 'The mesh “block.stl” is still used by Head core (its draft and saved variant v1), so it cannot be deleted.', field: 'meshId' } },
+      {
+        error: {
+          code: 'mesh_in_use',
+          message: 'The mesh “block.stl” is still used by Head core (its draft and saved variant v1), so it cannot be deleted.',
+          field: 'meshId',
+        },
+      },
       { status: 409, statusText: 'Conflict' },
     );
     expect(failure).toBeInstanceOf(ApiError);

@@ -10,10 +10,7 @@ import { API_BASE_URL } from '../api-base-url';
  * browser's transport does not report upload progress (the fetch backend); the screen then shows
  * one combined "uploading and checking" state.
  */
-export type MeshUploadEvent =
-  | { kind: 'uploading'; fraction: number | null }
-  | { kind: 'checking' }
-  | { kind: 'done'; mesh: Mesh };
+export type MeshUploadEvent = { kind: 'uploading'; fraction: number | null } | { kind: 'checking' } | { kind: 'done'; mesh: Mesh };
 
 /** Uploaded meshes of a workspace (`/workspaces/:id/meshes`): STL solids that mesh primitives refer to by id. */
 @Injectable({ providedIn: 'root' })

@@ -47,10 +47,12 @@ export class OperatorApi {
 
   /** Platform health; falls back to the public `/health` while the operator route is missing. */
   health(): Observable<PlatformHealth> {
-    return this.http.get<PlatformHealth>(`${this.base}/operator/health`).pipe(
-      catchError((error: unknown) =>
-        statusOf(error) === 404 ? this.http.get<PlatformHealth>(`${this.base}/health`) : throwError(() => error),
-      ),
-    );
+    return this.http
+      .get<PlatformHealth>(`${this.base}/operator/health`)
+      .pipe(
+        catchError((error: unknown) =>
+          statusOf(error) === 404 ? this.http.get<PlatformHealth>(`${this.base}/health`) : throwError(() => error),
+        ),
+      );
   }
 }

@@ -26,7 +26,11 @@ export class ReviewsApi {
   }
 
   /** Approves the variant or sends it back; 409 unless it is in review. */
-  decide(workspaceId: string, variantId: string, body: { decision: 'approved' | 'changes_requested'; body?: string }): Observable<ReviewThread> {
+  decide(
+    workspaceId: string,
+    variantId: string,
+    body: { decision: 'approved' | 'changes_requested'; body?: string },
+  ): Observable<ReviewThread> {
     return this.http.post<ReviewThread>(`${this.url(workspaceId, variantId)}/decision`, body);
   }
 

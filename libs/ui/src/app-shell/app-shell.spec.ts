@@ -4,9 +4,25 @@ import { provideRouter } from '@angular/router';
 import type { Membership, User } from '@tumblewise/shared';
 import { AppShell } from './app-shell';
 
-const USER: User = { id: '10000000-0000-4000-8000-000000000001', email: 'mira.okafor@example.test', name: 'Mira Okafor', isOperator: false, createdAt: '2026-11-02T09:00:00.000Z' };
-const HARBOUR = { id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b', name: 'Harbour Street Gear Lab', state: 'active' as const, createdAt: '2026-11-02T09:00:00.000Z' };
-const RIDGE = { id: '0a9b8c7d-6e5f-4a3b-9c2d-1e0f9a8b7c6d', name: 'Ridgeline Throwing Club', state: 'active' as const, createdAt: '2026-11-20T09:00:00.000Z' };
+const USER: User = {
+  id: '10000000-0000-4000-8000-000000000001',
+  email: 'mira.okafor@example.test',
+  name: 'Mira Okafor',
+  isOperator: false,
+  createdAt: '2026-11-02T09:00:00.000Z',
+};
+const HARBOUR = {
+  id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b',
+  name: 'Harbour Street Gear Lab',
+  state: 'active' as const,
+  createdAt: '2026-11-02T09:00:00.000Z',
+};
+const RIDGE = {
+  id: '0a9b8c7d-6e5f-4a3b-9c2d-1e0f9a8b7c6d',
+  name: 'Ridgeline Throwing Club',
+  state: 'active' as const,
+  createdAt: '2026-11-20T09:00:00.000Z',
+};
 
 @Component({
   imports: [AppShell],

@@ -14,7 +14,19 @@ import type { ShellLink } from './shell-link';
 @Component({
   selector: 'tw-app-shell',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [RouterLink, RouterLinkActive, MatToolbar, MatButton, MatIconButton, MatMenu, MatMenuItem, MatMenuTrigger, WorkspaceSwitcher, WorkspaceStateBanner, Cautions],
+  imports: [
+    RouterLink,
+    RouterLinkActive,
+    MatToolbar,
+    MatButton,
+    MatIconButton,
+    MatMenu,
+    MatMenuItem,
+    MatMenuTrigger,
+    WorkspaceSwitcher,
+    WorkspaceStateBanner,
+    Cautions,
+  ],
   templateUrl: './app-shell.html',
   styleUrl: './app-shell.scss',
 })
@@ -36,7 +48,7 @@ export class AppShell {
   /** Emits the id of the workspace picked in the switcher. */
   readonly workspaceSelected = output<string>();
   /** Emits when the user chooses "Sign out". */
-  readonly signOutRequested = output<void>();
+  readonly signOutRequested = output();
 
   /** The standing the state banner shows: the one given, else the current membership's workspace state. */
   protected readonly shownStanding = computed<WorkspaceStandingView | null>(

@@ -7,12 +7,12 @@ import { ChangeDetectionStrategy, Component, input } from '@angular/core';
   template: `
     <aside class="tw-cautions" [attr.aria-label]="label()" data-testid="cautions">
       <p>
-        <strong>Estimates only.</strong> Figures come from idealised geometry and nominal densities. They do not
-        certify that a design conforms to any governing body's rules; only that body's own test decides.
+        <strong>Estimates only.</strong> Figures come from idealised geometry and nominal densities. They do not certify that a design
+        conforms to any governing body's rules; only that body's own test decides.
       </p>
       <p>
-        <strong>Test safely.</strong> Thrown and swung implements can injure. Test prototypes in a cleared area,
-        under your organisation's safety rules.
+        <strong>Test safely.</strong> Thrown and swung implements can injure. Test prototypes in a cleared area, under your organisation's
+        safety rules.
       </p>
     </aside>
   `,

@@ -14,8 +14,13 @@ export const STATUS_LABELS: Record<VariantStatus, { label: string; icon: string 
   selector: 'tw-status-chip',
   changeDetection: ChangeDetectionStrategy.OnPush,
   template: `
-    <span class="tw-chip" [class.approved]="status() === 'approved'" [class.changes]="status() === 'changes_requested'"
-      data-testid="status-chip" [attr.data-status]="status()">
+    <span
+      class="tw-chip"
+      [class.approved]="status() === 'approved'"
+      [class.changes]="status() === 'changes_requested'"
+      data-testid="status-chip"
+      [attr.data-status]="status()"
+    >
       <span class="material-icons" aria-hidden="true">{{ entry().icon }}</span>{{ entry().label }}
     </span>
   `,

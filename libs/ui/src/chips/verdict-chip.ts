@@ -16,8 +16,15 @@ export const VERDICT_LABELS: Record<VerdictName, { label: string; icon: string; 
   changeDetection: ChangeDetectionStrategy.OnPush,
   template: `
     @if (entry(); as e) {
-      <span class="tw-chip" [class.steady]="verdict() === 'steady'" [class.watch]="verdict() === 'watch'" [class.flip]="verdict() === 'flip-prone'"
-        [attr.title]="e.hint" data-testid="verdict-chip" [attr.data-verdict]="verdict()">
+      <span
+        class="tw-chip"
+        [class.steady]="verdict() === 'steady'"
+        [class.watch]="verdict() === 'watch'"
+        [class.flip]="verdict() === 'flip-prone'"
+        [attr.title]="e.hint"
+        data-testid="verdict-chip"
+        [attr.data-verdict]="verdict()"
+      >
         <span class="material-icons" aria-hidden="true">{{ e.icon }}</span>{{ e.label }}
       </span>
     } @else {

@@ -43,5 +43,5 @@ export class ErrorBanner {
   /** Whether to offer a "Try again" button. */
   readonly retryable = input(false);
   /** Emitted when the user asks to try again. */
-  readonly retry = output<void>();
+  readonly retry = output();
 }

@@ -23,7 +23,10 @@ export interface WorkspaceNotice {
  * The notice for a workspace that is past due, read-only or suspended; null while it is active.
  * `formatDay` writes a date for the reader (the caller picks the locale).
  */
-export function workspaceNotice(standing: WorkspaceStandingView | null | undefined, formatDay: (iso: string) => string): WorkspaceNotice | null {
+export function workspaceNotice(
+  standing: WorkspaceStandingView | null | undefined,
+  formatDay: (iso: string) => string,
+): WorkspaceNotice | null {
   switch (standing?.state) {
     case 'past_due': {
       const when = standing.readOnlyFrom ? `on ${formatDay(standing.readOnlyFrom)}` : 'soon';

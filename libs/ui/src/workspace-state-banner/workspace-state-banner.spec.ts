@@ -7,8 +7,19 @@ import type { WorkspaceStandingView } from './workspace-notice';
 import { workspaceNotice } from './workspace-notice';
 
 // Invented user and workspace.
-const USER: User = { id: '10000000-0000-4000-8000-000000000001', email: 'mira.okafor@example.test', name: 'Mira Okafor', isOperator: false, createdAt: '2026-11-02T09:00:00.000Z' };
-const HARBOUR: Workspace = { id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b', name: 'Harbour Street Gear Lab', state: 'active', createdAt: '2026-11-02T09:00:00.000Z' };
+const USER: User = {
+  id: '10000000-0000-4000-8000-000000000001',
+  email: 'mira.okafor@example.test',
+  name: 'Mira Okafor',
+  isOperator: false,
+  createdAt: '2026-11-02T09:00:00.000Z',
+};
+const HARBOUR: Workspace = {
+  id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b',
+  name: 'Harbour Street Gear Lab',
+  state: 'active',
+  createdAt: '2026-11-02T09:00:00.000Z',
+};
 
 @Component({
   imports: [AppShell],
@@ -93,7 +104,9 @@ describe('workspaceNotice', () => {
   });
 
   it('does not double the full stop of a reason', () => {
-    expect(workspaceNotice({ state: 'suspended', suspendedReason: 'Terms breach.' }, day)?.text).toBe('Terms breach. You can sign in and read, not edit.');
+    expect(workspaceNotice({ state: 'suspended', suspendedReason: 'Terms breach.' }, day)?.text).toBe(
+      'Terms breach. You can sign in and read, not edit.',
+    );
     expect(workspaceNotice({ state: 'suspended', suspendedReason: '  ' }, day)?.text).toBe('You can sign in and read, not edit.');
   });
 

@@ -8,9 +8,17 @@ import { workspaceNotice, type WorkspaceStandingView } from './workspace-notice'
   changeDetection: ChangeDetectionStrategy.OnPush,
   template: `
     @if (notice(); as shown) {
-      <div class="tw-state-banner" [class]="'tw-state-' + shown.state" role="status" data-testid="workspace-state-banner" [attr.data-state]="shown.state">
+      <div
+        class="tw-state-banner"
+        [class]="'tw-state-' + shown.state"
+        role="status"
+        data-testid="workspace-state-banner"
+        [attr.data-state]="shown.state"
+      >
         <span class="material-icons" aria-hidden="true">{{ shown.icon }}</span>
-        <p><strong>{{ shown.title }}.</strong> {{ shown.text }}</p>
+        <p>
+          <strong>{{ shown.title }}.</strong> {{ shown.text }}
+        </p>
       </div>
     }
   `,

@@ -11,7 +11,8 @@ export function provideCharts(): Provider {
     echarts: () =>
       import('./echarts-setup').then(({ echarts }) => ({
         ...echarts,
-        init: (dom: HTMLElement, theme?: string | object | null, opts?: Parameters<typeof echarts.init>[2]) => echarts.init(dom, theme, { renderer: 'svg', ...opts }),
+        init: (dom: HTMLElement, theme?: string | object | null, opts?: Parameters<typeof echarts.init>[2]) =>
+          echarts.init(dom, theme, { renderer: 'svg', ...opts }),
       })),
   });
 }

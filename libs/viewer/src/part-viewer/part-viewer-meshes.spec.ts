@@ -13,15 +13,45 @@ import { TUMBLE_REQUEST_DELAY_MS, TwPartViewer } from './part-viewer';
 const scenes: Scene[] = [];
 jest.mock('three', () => ({
   ...jest.requireActual('three'),
-  WebGLRenderer: jest.fn(() => ({ setPixelRatio() {}, setSize() {}, dispose() {}, forceContextLoss() {}, render: (s: Scene) => scenes.push(s) })),
+  WebGLRenderer: jest.fn(() => ({
+    setPixelRatio() {},
+    setSize() {},
+    dispose() {},
+    forceContextLoss() {},
+    render: (s: Scene) => scenes.push(s),
+  })),
 }));
 
 // A corner tetrahedron with legs of 50 mm, as an uploaded mesh and as the same solid inline.
-const corners = [[0, 0, 0], [50, 0, 0], [0, 50, 0], [0, 0, 50]];
-const triangles = [[0, 2, 1], [0, 1, 3], [0, 3, 2], [1, 2, 3]];
+const corners = [
+  [0, 0, 0],
+  [50, 0, 0],
+  [0, 50, 0],
+  [0, 0, 50],
+];
+const triangles = [
+  [0, 2, 1],
+  [0, 1, 3],
+  [0, 3, 2],
+  [1, 2, 3],
+];
 const positions = new Float32Array(triangles.flatMap((t) => t.flatMap((k) => corners[k])));
-const scan = { id: 'scan', shape: 'mesh', meshId: 'mesh-1', scale: 0.001, position: [0, 0, 0], rotationDeg: [0, 0, 0], density: 900, mode: 'add' };
-const DOC = { name: 'Scan', primitives: [scan], spin: { axis: [0, 0, 1], rate: 5, misalignmentDeg: 1 }, dissipative: false } as unknown as PartDocument;
+const scan = {
+  id: 'scan',
+  shape: 'mesh',
+  meshId: 'mesh-1',
+  scale: 0.001,
+  position: [0, 0, 0],
+  rotationDeg: [0, 0, 0],
+  density: 900,
+  mode: 'add',
+};
+const DOC = {
+  name: 'Scan',
+  primitives: [scan],
+  spin: { axis: [0, 0, 1], rate: 5, misalignmentDeg: 1 },
+  dissipative: false,
+} as unknown as PartDocument;
 const INLINE = { ...DOC, primitives: [{ ...scan, meshId: undefined, vertices: corners, triangles }] } as unknown as PartDocument;
 const REPORT = analyzeValidatedPart(INLINE);
 const SIMULATION = simulate({ part: INLINE, misalignmentDeg: 1, seconds: 1, sampleRate: 60 });
@@ -39,7 +69,10 @@ describe('TwPartViewer with uploaded meshes', () => {
   });
   afterEach(() => delete (globalThis as { ResizeObserver?: unknown }).ResizeObserver);
 
-  async function open(source: ((id: string) => Promise<Float32Array>) | null, motion: { given: boolean; workspaceId?: string } = { given: true }) {
+  async function open(
+    source: ((id: string) => Promise<Float32Array>) | null,
+    motion: { given: boolean; workspaceId?: string } = { given: true },
+  ) {
     TestBed.configureTestingModule({
       imports: [TwPartViewer],
       providers: [
@@ -58,10 +91,11 @@ describe('TwPartViewer with uploaded meshes', () => {
     fixture.componentRef.setInput('simulation', motion.given ? SIMULATION : null);
     if (motion.workspaceId) fixture.componentRef.setInput('workspaceId', motion.workspaceId);
     if (motion.given) await fixture.whenStable();
-    else for (let i = 0; i < 3; i++) {
-      await new Promise((r) => setTimeout(r, 0));
-      fixture.detectChanges();
-    }
+    else
+      for (let i = 0; i < 3; i++) {
+        await new Promise((r) => setTimeout(r, 0));
+        fixture.detectChanges();
+      }
     // The part is drawn after the next paint (the frame, then the task after it).
     await new Promise((r) => requestAnimationFrame(() => setTimeout(r, 0)));
     fixture.detectChanges();

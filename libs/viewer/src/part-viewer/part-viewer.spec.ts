@@ -81,8 +81,16 @@ describe('TwPartViewer', () => {
     });
     backend = TestBed.inject(HttpTestingController);
     TestBed.inject(AuthState).setSession({
-      accessToken: 'token-one', expiresIn: 900, memberships: [],
-      user: { id: '5e4d3c2b-1a09-4f8e-b7d6-c5b4a3928170', email: 'mira.okafor@example.test', name: 'Mira Okafor', isOperator: false, createdAt: '2026-11-02T09:00:00.000Z' },
+      accessToken: 'token-one',
+      expiresIn: 900,
+      memberships: [],
+      user: {
+        id: '5e4d3c2b-1a09-4f8e-b7d6-c5b4a3928170',
+        email: 'mira.okafor@example.test',
+        name: 'Mira Okafor',
+        isOperator: false,
+        createdAt: '2026-11-02T09:00:00.000Z',
+      },
     });
     fixture = TestBed.createComponent(TwPartViewer);
     fixture.componentRef.setInput('document', PRACTICE_RACKET);
@@ -158,34 +166,39 @@ describe('TwPartViewer', () => {
     runFrames(100);
     runFrames(100);
     const last = drawn()[stoppedAt - 1];
-    drawn().slice(stoppedAt).forEach((q) => expect(q.angleTo(last)).toBe(0));
+    drawn()
+      .slice(stoppedAt)
+      .forEach((q) => expect(q.angleTo(last)).toBe(0));
   });
 
   it('asks the server for the motion when none is given, and again for a new misalignment', async () => {
     await open(null);
     const first = backend.expectOne('/api/v1/simulate');
-      expect(first.request.headers.get('Authorization')).toBe('Bearer token-one');
-      expect(first.request.body).toMatchObject({ part: PRACTICE_RACKET, misalignmentDeg: 1 });
-      expect(first.request.body.seconds * first.request.body.sampleRate).toBeLessThanOrEqual(20_000);
-      first.flush(SIMULATION);
-      await settle();
-      expect(testId('tumble-play')!.hasAttribute('disabled')).toBe(false);
+    expect(first.request.headers.get('Authorization')).toBe('Bearer token-one');
+    expect(first.request.body).toMatchObject({ part: PRACTICE_RACKET, misalignmentDeg: 1 });
+    expect(first.request.body.seconds * first.request.body.sampleRate).toBeLessThanOrEqual(20_000);
+    first.flush(SIMULATION);
+    await settle();
+    expect(testId('tumble-play')!.hasAttribute('disabled')).toBe(false);
 
-      const input = testId('tumble-misalignment') as HTMLInputElement;
-      input.value = '45';
-      input.dispatchEvent(new Event('change'));
-      await settle();
-      expect(testId('tumble-misalignment-error')!.textContent).toContain('from 0.1° to 20°');
-      backend.expectNone('/api/v1/simulate');
+    const input = testId('tumble-misalignment') as HTMLInputElement;
+    input.value = '45';
+    input.dispatchEvent(new Event('change'));
+    await settle();
+    expect(testId('tumble-misalignment-error')!.textContent).toContain('from 0.1° to 20°');
+    backend.expectNone('/api/v1/simulate');
 
-      input.value = '3';
-      input.dispatchEvent(new Event('change'));
-      await settle();
-      const second = backend.expectOne('/api/v1/simulate');
-      expect(second.request.body.misalignmentDeg).toBe(3);
-      second.flush({ error: { code: 'unanalysable', message: 'The part cannot be analysed.' } }, { status: 422, statusText: 'Unprocessable Entity' });
-      await settle();
-      expect(testId('error-banner')!.textContent).toContain('The part cannot be analysed.');
+    input.value = '3';
+    input.dispatchEvent(new Event('change'));
+    await settle();
+    const second = backend.expectOne('/api/v1/simulate');
+    expect(second.request.body.misalignmentDeg).toBe(3);
+    second.flush(
+      { error: { code: 'unanalysable', message: 'The part cannot be analysed.' } },
+      { status: 422, statusText: 'Unprocessable Entity' },
+    );
+    await settle();
+    expect(testId('error-banner')!.textContent).toContain('The part cannot be analysed.');
   });
 
   it('shows the spinner only while the motion is computed, not while it waits for the edits to pause', async () => {

@@ -139,14 +139,23 @@ export class TwPartViewer {
   /** Whether the motion request is on its way (not merely waiting for the edits to pause). */
   private readonly motionRequested = signal(false);
   private readonly motion = rxResource({
-    params: () => ({ document: this.document(), report: this.report(), misalignmentDeg: this.misalignment(), given: this.simulation(), workspaceId: this.workspaceId() }),
+    params: () => ({
+      document: this.document(),
+      report: this.report(),
+      misalignmentDeg: this.misalignment(),
+      given: this.simulation(),
+      workspaceId: this.workspaceId(),
+    }),
     stream: ({ params }) => {
       if (params.given && params.misalignmentDeg === (params.document.spin.misalignmentDeg ?? 1)) return of(params.given);
-      return timer(this.requestDelay).pipe(switchMap(() => {
-        this.motionRequested.set(true);
-        return this.simulationApi.simulate(tumbleRequest(params.document, params.report, params.misalignmentDeg), params.workspaceId)
-          .pipe(finalize(() => this.motionRequested.set(false)));
-      }));
+      return timer(this.requestDelay).pipe(
+        switchMap(() => {
+          this.motionRequested.set(true);
+          return this.simulationApi
+            .simulate(tumbleRequest(params.document, params.report, params.misalignmentDeg), params.workspaceId)
+            .pipe(finalize(() => this.motionRequested.set(false)));
+        }),
+      );
     },
   });
   protected readonly track = computed(() => (this.motion.hasValue() ? this.motion.value() : null));
@@ -161,12 +170,20 @@ export class TwPartViewer {
     const error = this.motion.error();
     return error ? `The tumble preview could not be computed: ${toApiError(error).message}` : null;
   });
-  protected readonly duration = computed(() => { const t = this.track(); return t ? trackDuration(t) : 0; });
-  protected readonly omegaOptions = computed(() => { const t = this.track(); return t ? omegaChartOptions(t) : null; });
+  protected readonly duration = computed(() => {
+    const t = this.track();
+    return t ? trackDuration(t) : 0;
+  });
+  protected readonly omegaOptions = computed(() => {
+    const t = this.track();
+    return t ? omegaChartOptions(t) : null;
+  });
   protected readonly summary = computed(() => tumbleSummary(this.report(), this.track(), this.misalignment()));
   protected readonly canvasLabel = computed(() => {
     const r = this.report();
-    const failed = this.uploadedMeshStatus().failed.map((f) => ` The uploaded mesh “${f.id}” is not drawn: ${f.message}.`).join('');
+    const failed = this.uploadedMeshStatus()
+      .failed.map((f) => ` The uploaded mesh “${f.id}” is not drawn: ${f.message}.`)
+      .join('');
     return `3-D view of ${r.name ?? 'the part'} with its principal axes and intended spin axis.${failed} ${this.playing() ? 'The tumble preview is playing.' : 'The tumble preview is paused.'}`;
   });
 
@@ -301,7 +318,9 @@ export class TwPartViewer {
     } catch (err) {
       this.partStage?.dispose();
       this.partStage = null;
-      this.webglError.set('The 3-D view needs WebGL, which this browser could not start. The figures and the description below still apply.');
+      this.webglError.set(
+        'The 3-D view needs WebGL, which this browser could not start. The figures and the description below still apply.',
+      );
       if (isDevMode()) console.warn('tw-part-viewer: WebGL did not start', err);
       return;
     }
@@ -316,7 +335,10 @@ export class TwPartViewer {
   }
 
   private sizeStages(): void {
-    for (const [stage, canvas] of [[this.partStage, this.partCanvas()], [this.polhodeStage, this.polhodeCanvas()]] as const) {
+    for (const [stage, canvas] of [
+      [this.partStage, this.partCanvas()],
+      [this.polhodeStage, this.polhodeCanvas()],
+    ] as const) {
       const el = canvas.nativeElement;
       stage?.resize(el.clientWidth, el.clientHeight);
     }
@@ -327,7 +349,12 @@ export class TwPartViewer {
     if (!stage) return;
     const previousReach = this.partScene?.reach ?? null;
     if (this.partScene) disposeObject(this.partScene.body);
-    this.partScene = buildPartScene(doc, report, (meshId, scale) => this.meshCache.lookup(meshId, scale), this.primitiveGeometries.geometryOf);
+    this.partScene = buildPartScene(
+      doc,
+      report,
+      (meshId, scale) => this.meshCache.lookup(meshId, scale),
+      this.primitiveGeometries.geometryOf,
+    );
     this.primitiveGeometries.keepOnly();
     stage.scene.add(this.partScene.body);
     this.uploadedMeshStatus.set(this.partScene.uploadedMeshes);
@@ -344,10 +371,12 @@ export class TwPartViewer {
   private schedulePartRedraw(): void {
     if (this.partRedrawPending) return;
     this.partRedrawPending = true;
-    requestAnimationFrame(() => setTimeout(() => {
-      this.partRedrawPending = false;
-      this.redrawPart();
-    }));
+    requestAnimationFrame(() =>
+      setTimeout(() => {
+        this.partRedrawPending = false;
+        this.redrawPart();
+      }),
+    );
   }
 
   /** Draws the current document again (an uploaded mesh arrived or failed). */

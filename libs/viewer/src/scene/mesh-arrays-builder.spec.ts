@@ -8,9 +8,15 @@ class FakeWorker {
   onerror: ((e: { preventDefault(): void }) => void) | null = null;
   jobs: MeshArraysRequest[] = [];
   terminated = false;
-  constructor() { FakeWorker.started.push(this); }
-  postMessage(job: MeshArraysRequest) { this.jobs.push(job); }
-  terminate() { this.terminated = true; }
+  constructor() {
+    FakeWorker.started.push(this);
+  }
+  postMessage(job: MeshArraysRequest) {
+    this.jobs.push(job);
+  }
+  terminate() {
+    this.terminated = true;
+  }
   answerAll() {
     for (const { id, data, scale } of [...this.jobs].reverse()) {
       try {
@@ -29,11 +35,15 @@ import { MeshArraysBuilder } from './mesh-arrays-builder'; // after the mock it 
 const triangle = (size: number) => new Float32Array([0, 0, 0, size, 0, 0, 0, size, 0]);
 
 describe('MeshArraysBuilder', () => {
-  beforeEach(() => { FakeWorker.started = []; });
+  beforeEach(() => {
+    FakeWorker.started = [];
+  });
 
   it('sends each build to one worker and gives every answer to its own caller', async () => {
     const builder = new MeshArraysBuilder();
-    const small = builder.build(triangle(1), 1), large = builder.build(triangle(5), 2), broken = builder.build(new Float32Array(4), 1);
+    const small = builder.build(triangle(1), 1),
+      large = builder.build(triangle(5), 2),
+      broken = builder.build(new Float32Array(4), 1);
     expect(FakeWorker.started).toHaveLength(1);
     FakeWorker.started[0].answerAll();
     expect((await small).positions[3]).toBe(1);

@@ -22,7 +22,10 @@ export type MeshArraysBuild = (data: ArrayBuffer | Float32Array, scale: number) 
 export class MeshArraysBuilder {
   private worker: Worker | null | undefined;
   private nextId = 1;
-  private readonly waiting = new Map<number, { data: ArrayBuffer | Float32Array; scale: number; resolve: (a: MeshArrays) => void; reject: (e: unknown) => void }>();
+  private readonly waiting = new Map<
+    number,
+    { data: ArrayBuffer | Float32Array; scale: number; resolve: (a: MeshArrays) => void; reject: (e: unknown) => void }
+  >();
 
   readonly build: MeshArraysBuild = (data, scale) => {
     const worker = this.workerOrNull();

@@ -13,12 +13,45 @@ function threeNormals(positions: Float32Array): Float32Array {
 describe('flatNormals', () => {
   it('gives the normals three.js computes for a triangle soup, a degenerate triangle included', () => {
     const positions = new Float32Array([
-      0, 0, 0, 1, 0, 0, 0, 1, 0, // in the xy plane, counter-clockwise: +z
-      0, 0, 0, 0, 0, 2, 3, 0, 0, // in the xz plane
-      0.3, -1.2, 4, 2.5, 0.7, -0.4, -1, 2, 1.5, // skewed
-      1, 1, 1, 2, 2, 2, 3, 3, 3, // on one line: no normal
+      0,
+      0,
+      0,
+      1,
+      0,
+      0,
+      0,
+      1,
+      0, // in the xy plane, counter-clockwise: +z
+      0,
+      0,
+      0,
+      0,
+      0,
+      2,
+      3,
+      0,
+      0, // in the xz plane
+      0.3,
+      -1.2,
+      4,
+      2.5,
+      0.7,
+      -0.4,
+      -1,
+      2,
+      1.5, // skewed
+      1,
+      1,
+      1,
+      2,
+      2,
+      2,
+      3,
+      3,
+      3, // on one line: no normal
     ]);
-    const ours = flatNormals(positions), theirs = threeNormals(positions);
+    const ours = flatNormals(positions),
+      theirs = threeNormals(positions);
     expect(ours).toHaveLength(theirs.length);
     ours.forEach((n, i) => expect(n).toBeCloseTo(theirs[i], 6));
     expect(Array.from(ours.slice(0, 3))).toEqual([0, 0, 1]);
@@ -34,6 +67,8 @@ describe('meshArraysFromData', () => {
   });
 
   it('names the STL reader’s finding for a file that is not STL', () => {
-    expect(() => meshArraysFromData(new TextEncoder().encode('not a mesh at all').buffer as ArrayBuffer, 1)).toThrow(/could not be read as STL: .+/);
+    expect(() => meshArraysFromData(new TextEncoder().encode('not a mesh at all').buffer as ArrayBuffer, 1)).toThrow(
+      /could not be read as STL: .+/,
+    );
   });
 });

@@ -41,9 +41,15 @@ function stlCorners(bytes: ArrayBuffer): Float32Array {
 export function signedVolumeOf(positions: ArrayLike<number>): number {
   let sum = 0;
   for (let k = 0; k + 8 < positions.length; k += 9) {
-    const ax = positions[k], ay = positions[k + 1], az = positions[k + 2];
-    const bx = positions[k + 3], by = positions[k + 4], bz = positions[k + 5];
-    const cx = positions[k + 6], cy = positions[k + 7], cz = positions[k + 8];
+    const ax = positions[k],
+      ay = positions[k + 1],
+      az = positions[k + 2];
+    const bx = positions[k + 3],
+      by = positions[k + 4],
+      bz = positions[k + 5];
+    const cx = positions[k + 6],
+      cy = positions[k + 7],
+      cz = positions[k + 8];
     sum += ax * (by * cz - bz * cy) + ay * (bz * cx - bx * cz) + az * (bx * cy - by * cx);
   }
   return sum / 6;
@@ -68,15 +74,31 @@ function flipWinding(positions: Float32Array): void {
 export function flatNormals(positions: Float32Array): Float32Array {
   const normals = new Float32Array(positions.length);
   for (let k = 0; k + 8 < positions.length; k += 9) {
-    const ax = positions[k], ay = positions[k + 1], az = positions[k + 2];
-    const bx = positions[k + 3], by = positions[k + 4], bz = positions[k + 5];
-    const cx = positions[k + 6] - bx, cy = positions[k + 7] - by, cz = positions[k + 8] - bz;
-    const ux = ax - bx, uy = ay - by, uz = az - bz;
-    let nx = cy * uz - cz * uy, ny = cz * ux - cx * uz, nz = cx * uy - cy * ux;
+    const ax = positions[k],
+      ay = positions[k + 1],
+      az = positions[k + 2];
+    const bx = positions[k + 3],
+      by = positions[k + 4],
+      bz = positions[k + 5];
+    const cx = positions[k + 6] - bx,
+      cy = positions[k + 7] - by,
+      cz = positions[k + 8] - bz;
+    const ux = ax - bx,
+      uy = ay - by,
+      uz = az - bz;
+    let nx = cy * uz - cz * uy,
+      ny = cz * ux - cx * uz,
+      nz = cx * uy - cy * ux;
     const length = Math.hypot(nx, ny, nz);
-    if (length > 0) { nx /= length; ny /= length; nz /= length; }
+    if (length > 0) {
+      nx /= length;
+      ny /= length;
+      nz /= length;
+    }
     for (let j = 0; j < 9; j += 3) {
-      normals[k + j] = nx; normals[k + j + 1] = ny; normals[k + j + 2] = nz;
+      normals[k + j] = nx;
+      normals[k + j + 1] = ny;
+      normals[k + j + 2] = nz;
     }
   }
   return normals;

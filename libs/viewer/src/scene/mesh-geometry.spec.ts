@@ -12,7 +12,12 @@ const tetra = (a: number): Tri[] => {
   const y: [number, number, number] = [0, a, 0];
   const z: [number, number, number] = [0, 0, a];
   // Counter-clockwise seen from outside (outward normals).
-  return [[o, y, x], [o, x, z], [o, z, y], [x, y, z]];
+  return [
+    [o, y, x],
+    [o, x, z],
+    [o, z, y],
+    [x, y, z],
+  ];
 };
 
 /** A binary STL (80-byte header, count, 50 bytes a triangle: normal, three corners, attribute). */
@@ -25,7 +30,9 @@ function binaryStl(tris: Tri[]): ArrayBuffer {
 }
 
 function asciiStl(tris: Tri[]): ArrayBuffer {
-  const facets = tris.map((t) => `facet normal 0 0 0\n outer loop\n${t.map((p) => `  vertex ${p.join(' ')}`).join('\n')}\n endloop\nendfacet`);
+  const facets = tris.map(
+    (t) => `facet normal 0 0 0\n outer loop\n${t.map((p) => `  vertex ${p.join(' ')}`).join('\n')}\n endloop\nendfacet`,
+  );
   return new TextEncoder().encode(`solid tetra\n${facets.join('\n')}\nendsolid tetra\n`).buffer as ArrayBuffer;
 }
 
@@ -68,7 +75,9 @@ describe('meshGeometryFromData', () => {
 
   it('says what is wrong with data that holds no triangles or a bad scale', () => {
     expect(() => meshGeometryFromData(new ArrayBuffer(0), 1)).toThrow('the file is empty');
-    expect(() => meshGeometryFromData(new TextEncoder().encode('solid nothing\nendsolid nothing\n').buffer as ArrayBuffer, 1)).toThrow(/could not be read as STL|no complete triangles/);
+    expect(() => meshGeometryFromData(new TextEncoder().encode('solid nothing\nendsolid nothing\n').buffer as ArrayBuffer, 1)).toThrow(
+      /could not be read as STL|no complete triangles/,
+    );
     expect(() => meshGeometryFromData(new Float32Array(7), 1)).toThrow('no complete triangles');
     expect(() => meshGeometryFromData(binaryStl(tetra(1)), 0)).toThrow('scale');
     expect(() => meshGeometryFromData(new Float32Array([Number.NaN, 0, 0, 1, 0, 0, 0, 1, 0]), 1)).toThrow('finite');
@@ -98,16 +107,24 @@ describe('MeshGeometryCache', () => {
   });
 
   it('answers failed with the reason when the fetch fails or the bytes are not a mesh, and never throws', async () => {
-    const cache = new MeshGeometryCache(async (id) => {
-      if (id === 'gone') throw new Error('Mesh was not found.');
-      return new ArrayBuffer(0);
-    }, () => undefined);
+    const cache = new MeshGeometryCache(
+      async (id) => {
+        if (id === 'gone') throw new Error('Mesh was not found.');
+        return new ArrayBuffer(0);
+      },
+      () => undefined,
+    );
     cache.lookup('gone', 1);
     cache.lookup('empty', 1);
     await flush();
     expect(cache.lookup('gone', 1)).toEqual({ state: 'failed', message: 'Mesh was not found.' });
     expect(cache.lookup('empty', 1)).toEqual({ state: 'failed', message: 'the file is empty' });
-    const throwing = new MeshGeometryCache(() => { throw new Error('no session'); }, () => undefined);
+    const throwing = new MeshGeometryCache(
+      () => {
+        throw new Error('no session');
+      },
+      () => undefined,
+    );
     expect(throwing.lookup('x', 1)).toEqual({ state: 'pending' });
     await flush();
     expect(throwing.lookup('x', 1)).toEqual({ state: 'failed', message: 'no session' });
@@ -115,7 +132,10 @@ describe('MeshGeometryCache', () => {
 
   it('answers pending while a build runs off the page, then ready, and draws again when it is', async () => {
     let finish: () => void = () => undefined;
-    const build = jest.fn((data: ArrayBuffer | Float32Array, scale: number) => new Promise<MeshArrays>((resolve) => (finish = () => resolve(meshArraysFromData(data, scale)))));
+    const build = jest.fn(
+      (data: ArrayBuffer | Float32Array, scale: number) =>
+        new Promise<MeshArrays>((resolve) => (finish = () => resolve(meshArraysFromData(data, scale)))),
+    );
     const changed = jest.fn();
     const cache = new MeshGeometryCache(async () => binaryStl(tetra(10)), changed, build);
     cache.lookup('m1', 0.001);
@@ -134,7 +154,11 @@ describe('MeshGeometryCache', () => {
   });
 
   it('answers failed with the reason of a build that fails off the page, and drops builds after dispose', async () => {
-    const failing = new MeshGeometryCache(async () => new ArrayBuffer(8), () => undefined, () => Promise.reject(new Error('the mesh holds no complete triangles')));
+    const failing = new MeshGeometryCache(
+      async () => new ArrayBuffer(8),
+      () => undefined,
+      () => Promise.reject(new Error('the mesh holds no complete triangles')),
+    );
     failing.lookup('m', 1);
     await flush();
     failing.lookup('m', 1);
@@ -142,7 +166,11 @@ describe('MeshGeometryCache', () => {
     expect(failing.lookup('m', 1)).toEqual({ state: 'failed', message: 'the mesh holds no complete triangles' });
     let finish: () => void = () => undefined;
     const changed = jest.fn();
-    const gone = new MeshGeometryCache(async () => binaryStl(tetra(1)), changed, (d, s) => new Promise<MeshArrays>((r) => (finish = () => r(meshArraysFromData(d, s)))));
+    const gone = new MeshGeometryCache(
+      async () => binaryStl(tetra(1)),
+      changed,
+      (d, s) => new Promise<MeshArrays>((r) => (finish = () => r(meshArraysFromData(d, s)))),
+    );
     gone.lookup('m', 1);
     await flush();
     gone.lookup('m', 1);
@@ -159,7 +187,10 @@ describe('MeshGeometryCache', () => {
   it('frees its geometries when disposed and drops answers still on their way', async () => {
     let release: (b: ArrayBuffer) => void = () => undefined;
     const changed = jest.fn();
-    const cache = new MeshGeometryCache(async (id) => (id === 'slow' ? new Promise<ArrayBuffer>((r) => (release = r)) : binaryStl(tetra(1))), changed);
+    const cache = new MeshGeometryCache(
+      async (id) => (id === 'slow' ? new Promise<ArrayBuffer>((r) => (release = r)) : binaryStl(tetra(1))),
+      changed,
+    );
     cache.lookup('fast', 1);
     cache.lookup('slow', 1);
     await flush();
@@ -175,7 +206,10 @@ describe('MeshGeometryCache', () => {
 
   it('is left alone by disposeObject, which frees the scene’s own geometries', async () => {
     const { Group, Mesh, MeshBasicMaterial, BoxGeometry } = await import('three');
-    const cache = new MeshGeometryCache(async () => binaryStl(tetra(1)), () => undefined);
+    const cache = new MeshGeometryCache(
+      async () => binaryStl(tetra(1)),
+      () => undefined,
+    );
     cache.lookup('m', 1);
     await flush();
     const found = cache.lookup('m', 1);

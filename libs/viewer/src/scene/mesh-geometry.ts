@@ -26,10 +26,7 @@ export function meshGeometryFromArrays(arrays: MeshArrays): BufferGeometry {
 }
 
 /** What the cache knows of one uploaded mesh at one scale. */
-export type MeshGeometryState =
-  | { state: 'ready'; geometry: BufferGeometry }
-  | { state: 'pending' }
-  | { state: 'failed'; message: string };
+export type MeshGeometryState = { state: 'ready'; geometry: BufferGeometry } | { state: 'pending' } | { state: 'failed'; message: string };
 
 /**
  * Uploaded meshes for the part scene, fetched once per `meshId` and built once per scale. Asking for
@@ -40,7 +37,10 @@ export type MeshGeometryState =
  * and ignores answers still on their way.
  */
 export class MeshGeometryCache {
-  private readonly data = new Map<string, { state: 'pending' } | { state: 'ready'; data: ArrayBuffer | Float32Array } | { state: 'failed'; message: string }>();
+  private readonly data = new Map<
+    string,
+    { state: 'pending' } | { state: 'ready'; data: ArrayBuffer | Float32Array } | { state: 'failed'; message: string }
+  >();
   private readonly built = new Map<string, MeshGeometryState>();
   private readonly builder: MeshArraysBuilder | null;
   private readonly build: MeshArraysBuild;
@@ -78,8 +78,18 @@ export class MeshGeometryCache {
     if (!(arrays instanceof Promise)) return this.finish(key, ready(arrays));
     this.built.set(key, { state: 'pending' });
     arrays.then(
-      (a) => { if (!this.disposed) { this.finish(key, ready(a)); this.changed(); } },
-      (err: unknown) => { if (!this.disposed) { this.finish(key, { state: 'failed', message: reasonOf(err) }); this.changed(); } },
+      (a) => {
+        if (!this.disposed) {
+          this.finish(key, ready(a));
+          this.changed();
+        }
+      },
+      (err: unknown) => {
+        if (!this.disposed) {
+          this.finish(key, { state: 'failed', message: reasonOf(err) });
+          this.changed();
+        }
+      },
     );
     return { state: 'pending' };
   }
@@ -107,7 +117,13 @@ export class MeshGeometryCache {
       request = Promise.reject(err);
     }
     request.then(
-      (data) => this.settle(meshId, data instanceof Float32Array || isArrayBuffer(data) ? { state: 'ready', data } : { state: 'failed', message: 'the server sent no mesh data' }),
+      (data) =>
+        this.settle(
+          meshId,
+          data instanceof Float32Array || isArrayBuffer(data)
+            ? { state: 'ready', data }
+            : { state: 'failed', message: 'the server sent no mesh data' },
+        ),
       (err: unknown) => this.settle(meshId, { state: 'failed', message: reasonOf(err) }),
     );
   }

@@ -47,7 +47,13 @@ describe('buildPartScene', () => {
   });
 
   it('lists uploaded meshes it cannot draw', () => {
-    const doc = { ...TILTED_CONE, primitives: [...TILTED_CONE.primitives, { id: 'scan', shape: 'mesh', meshId: 'm-1', scale: 0.001, position: [0, 0, 0], rotationDeg: [0, 0, 0], density: 900, mode: 'add' }] };
+    const doc = {
+      ...TILTED_CONE,
+      primitives: [
+        ...TILTED_CONE.primitives,
+        { id: 'scan', shape: 'mesh', meshId: 'm-1', scale: 0.001, position: [0, 0, 0], rotationDeg: [0, 0, 0], density: 900, mode: 'add' },
+      ],
+    };
     const report = analyzeValidatedPart(TILTED_CONE);
     expect(buildPartScene(doc as never, report).notDrawn).toEqual(['scan']);
   });
@@ -56,7 +62,9 @@ describe('buildPartScene', () => {
     const spy = jest.spyOn(BufferGeometry.prototype, 'dispose');
     const scene = buildPartScene(PRACTICE_RACKET, analyzeValidatedPart(PRACTICE_RACKET));
     let geometries = 0;
-    scene.body.traverse((o) => { if ((o as Mesh).geometry) geometries++; });
+    scene.body.traverse((o) => {
+      if ('geometry' in o && o.geometry) geometries++;
+    });
     disposeObject(scene.body);
     expect(spy.mock.calls.length).toBeGreaterThanOrEqual(geometries);
     spy.mockRestore();
@@ -66,13 +74,40 @@ describe('buildPartScene', () => {
     // A corner tetrahedron with legs of 40 mm (file units mm, scale 0.001). Its centroid is the mean
     // of its corners, a/4 along each axis (CRC Standard Mathematical Tables, centroid of a tetrahedron).
     const a = 40;
-    const corners = [[0, 0, 0], [a, 0, 0], [0, a, 0], [0, 0, a]];
-    const triangles = [[0, 2, 1], [0, 1, 3], [0, 3, 2], [1, 2, 3]];
+    const corners = [
+      [0, 0, 0],
+      [a, 0, 0],
+      [0, a, 0],
+      [0, 0, a],
+    ];
+    const triangles = [
+      [0, 2, 1],
+      [0, 1, 3],
+      [0, 3, 2],
+      [1, 2, 3],
+    ];
     const positions = new Float32Array(triangles.flatMap((t) => t.flatMap((k) => corners[k])));
-    const uploaded = { id: 'scan', shape: 'mesh', meshId: 'm-1', scale: 0.001, position: [0, 0, 0], rotationDeg: [0, 0, 0], density: 900, mode: 'add' };
-    const doc = { name: 'Scan', primitives: [uploaded], spin: { axis: [0, 0, 1], rate: 5, misalignmentDeg: 1 }, dissipative: false } as never;
+    const uploaded = {
+      id: 'scan',
+      shape: 'mesh',
+      meshId: 'm-1',
+      scale: 0.001,
+      position: [0, 0, 0],
+      rotationDeg: [0, 0, 0],
+      density: 900,
+      mode: 'add',
+    };
+    const doc = {
+      name: 'Scan',
+      primitives: [uploaded],
+      spin: { axis: [0, 0, 1], rate: 5, misalignmentDeg: 1 },
+      dissipative: false,
+    } as never;
     // The report of the same solid given inline, as the server computes it for the upload.
-    const report = analyzeValidatedPart({ ...(doc as object), primitives: [{ ...uploaded, meshId: undefined, vertices: corners, triangles }] } as never);
+    const report = analyzeValidatedPart({
+      ...(doc as object),
+      primitives: [{ ...uploaded, meshId: undefined, vertices: corners, triangles }],
+    } as never);
 
     it('draws a mesh the lookup has, times its scale, centred on the centre of mass', () => {
       report.centerOfMass.forEach((c) => expect(c).toBeCloseTo(0.04 / 4, 9));

@@ -1,4 +1,15 @@
-import { Box3, type BufferGeometry, DoubleSide, Group, Matrix4, Mesh, MeshStandardMaterial, SphereGeometry, TorusGeometry, Vector3 } from 'three';
+import {
+  Box3,
+  type BufferGeometry,
+  DoubleSide,
+  Group,
+  Matrix4,
+  Mesh,
+  MeshStandardMaterial,
+  SphereGeometry,
+  TorusGeometry,
+  Vector3,
+} from 'three';
 import { sharedMaterial } from './shared-materials';
 import type { PartDocument } from '@tumblewise/shared';
 import type { SpinReport } from '@tumblewise/engine';
@@ -40,7 +51,9 @@ export type UploadedMeshLookup = (meshId: string, scale: number) => MeshGeometry
  * `geometryOf` gives each primitive's geometry (a PrimitiveGeometryCache keeps them between drawings).
  */
 export function buildPartScene(
-  doc: PartDocument, report: SpinReport, uploaded?: UploadedMeshLookup,
+  doc: PartDocument,
+  report: SpinReport,
+  uploaded?: UploadedMeshLookup,
   geometryOf: (p: PartDocument['primitives'][number]) => BufferGeometry | null = primitiveGeometry,
 ): PartScene {
   const body = new Group();
@@ -51,10 +64,20 @@ export function buildPartScene(
   solids.position.set(-c[0], -c[1], -c[2]);
   body.add(solids);
 
-  const solid = sharedMaterial('part:solid', () => new MeshStandardMaterial({ color: VIEWER_COLOURS.solid, roughness: 0.65, metalness: 0.05 }));
-  const removal = sharedMaterial('part:removal', () => new MeshStandardMaterial({ color: VIEWER_COLOURS.removal, transparent: true, opacity: 0.35, depthWrite: false, side: DoubleSide }));
+  const solid = sharedMaterial(
+    'part:solid',
+    () => new MeshStandardMaterial({ color: VIEWER_COLOURS.solid, roughness: 0.65, metalness: 0.05 }),
+  );
+  const removal = sharedMaterial(
+    'part:removal',
+    () =>
+      new MeshStandardMaterial({ color: VIEWER_COLOURS.removal, transparent: true, opacity: 0.35, depthWrite: false, side: DoubleSide }),
+  );
   const twoSided = {
-    add: sharedMaterial('part:solid-two-sided', () => new MeshStandardMaterial({ color: VIEWER_COLOURS.solid, roughness: 0.65, metalness: 0.05, side: DoubleSide })),
+    add: sharedMaterial(
+      'part:solid-two-sided',
+      () => new MeshStandardMaterial({ color: VIEWER_COLOURS.solid, roughness: 0.65, metalness: 0.05, side: DoubleSide }),
+    ),
     remove: removal,
   };
   const placement = new Matrix4();
@@ -74,7 +97,9 @@ export function buildPartScene(
     let geometry = geometryOf(p);
     let material = p.mode === 'remove' ? removal : solid;
     if (!geometry && p.shape === 'mesh' && p.meshId) {
-      const found: MeshGeometryState = uploaded ? uploaded(p.meshId, p.scale ?? 1) : { state: 'failed', message: 'this view has no access to uploaded meshes' };
+      const found: MeshGeometryState = uploaded
+        ? uploaded(p.meshId, p.scale ?? 1)
+        : { state: 'failed', message: 'this view has no access to uploaded meshes' };
       if (found.state === 'ready') {
         geometry = found.geometry;
         material = p.mode === 'remove' ? twoSided.remove : twoSided.add;
@@ -96,10 +121,17 @@ export function buildPartScene(
 
   solids.updateMatrixWorld(true);
   const box = new Box3().setFromObject(solids);
-  const reach = Math.max(1e-3, box.isEmpty() ? 0 : farthestCorner(box, new Vector3()), ...doc.primitives.map((p) => distance(p.position, c)));
+  const reach = Math.max(
+    1e-3,
+    box.isEmpty() ? 0 : farthestCorner(box, new Vector3()),
+    ...doc.primitives.map((p) => distance(p.position, c)),
+  );
 
   const markerGeometry = new SphereGeometry(reach * 0.035, 16, 12);
-  const markerMaterial = sharedMaterial('part:point-mass', () => new MeshStandardMaterial({ color: VIEWER_COLOURS.pointMass, roughness: 0.4 }));
+  const markerMaterial = sharedMaterial(
+    'part:point-mass',
+    () => new MeshStandardMaterial({ color: VIEWER_COLOURS.pointMass, roughness: 0.4 }),
+  );
   for (const marker of points) marker.add(new Mesh(markerGeometry, markerMaterial));
 
   const rodRadius = reach * 0.008;
@@ -110,7 +142,10 @@ export function buildPartScene(
   });
   const spin = axisRod(doc.spin.axis, reach * 1.45, rodRadius * 0.6, VIEWER_COLOURS.spinAxis);
   spin.name = 'axis:spin';
-  const ring = new Mesh(new TorusGeometry(reach * 0.12, rodRadius * 0.6, 8, 40, Math.PI * 1.6), sharedMaterial('part:spin-ring', () => new MeshStandardMaterial({ color: VIEWER_COLOURS.spinAxis })));
+  const ring = new Mesh(
+    new TorusGeometry(reach * 0.12, rodRadius * 0.6, 8, 40, Math.PI * 1.6),
+    sharedMaterial('part:spin-ring', () => new MeshStandardMaterial({ color: VIEWER_COLOURS.spinAxis })),
+  );
   // The rod is built along +y; the ring goes round that axis near the tip.
   ring.rotation.x = Math.PI / 2;
   ring.position.y = reach * 1.2;
@@ -122,9 +157,11 @@ export function buildPartScene(
 /** Largest distance from `centre` to a corner of `box`. */
 function farthestCorner(box: Box3, centre: Vector3): number {
   let best = 0;
-  for (const x of [box.min.x, box.max.x]) for (const y of [box.min.y, box.max.y]) for (const z of [box.min.z, box.max.z]) {
-    best = Math.max(best, Math.hypot(x - centre.x, y - centre.y, z - centre.z));
-  }
+  for (const x of [box.min.x, box.max.x])
+    for (const y of [box.min.y, box.max.y])
+      for (const z of [box.min.z, box.max.z]) {
+        best = Math.max(best, Math.hypot(x - centre.x, y - centre.y, z - centre.z));
+      }
   return best;
 }
 

@@ -28,7 +28,10 @@ function expectVectorClose(actual: Vector3, expected: [number, number, number], 
 
 describe('placementRotation', () => {
   it.each(ANGLES)('equals three.js Rz·Ry·Rx for [%s, %s, %s]', (rx, ry, rz) => {
-    const expected = new Matrix4().makeRotationZ(rad(rz)).multiply(new Matrix4().makeRotationY(rad(ry))).multiply(new Matrix4().makeRotationX(rad(rx)));
+    const expected = new Matrix4()
+      .makeRotationZ(rad(rz))
+      .multiply(new Matrix4().makeRotationY(rad(ry)))
+      .multiply(new Matrix4().makeRotationX(rad(rx)));
     expectMatrixClose(placementRotation(new Matrix4(), [rx, ry, rz]), expected);
   });
 
@@ -47,17 +50,37 @@ describe('placementRotation', () => {
   it('rotates about the fixed axes in turn: x first, then y, then z (three.js applyAxisAngle)', () => {
     const v = new Vector3(0.3, -0.7, 0.2);
     const [rx, ry, rz] = [40, -25, 75];
-    const stepByStep = v.clone().applyAxisAngle(new Vector3(1, 0, 0), rad(rx)).applyAxisAngle(new Vector3(0, 1, 0), rad(ry)).applyAxisAngle(new Vector3(0, 0, 1), rad(rz));
+    const stepByStep = v
+      .clone()
+      .applyAxisAngle(new Vector3(1, 0, 0), rad(rx))
+      .applyAxisAngle(new Vector3(0, 1, 0), rad(ry))
+      .applyAxisAngle(new Vector3(0, 0, 1), rad(rz));
     const ours = v.clone().applyMatrix4(placementRotation(new Matrix4(), [rx, ry, rz]));
     expectVectorClose(ours, [stepByStep.x, stepByStep.y, stepByStep.z]);
   });
 
   // Right-hand rule (common practice): +90° about x takes y to z and z to −y; about y takes z to x; about z takes x to y.
   it.each([
-    [[90, 0, 0], [0, 0, 1], [0, -1, 0]],
-    [[90, 0, 0], [0, 1, 0], [0, 0, 1]],
-    [[0, 90, 0], [0, 0, 1], [1, 0, 0]],
-    [[0, 0, 90], [1, 0, 0], [0, 1, 0]],
+    [
+      [90, 0, 0],
+      [0, 0, 1],
+      [0, -1, 0],
+    ],
+    [
+      [90, 0, 0],
+      [0, 1, 0],
+      [0, 0, 1],
+    ],
+    [
+      [0, 90, 0],
+      [0, 0, 1],
+      [1, 0, 0],
+    ],
+    [
+      [0, 0, 90],
+      [1, 0, 0],
+      [0, 1, 0],
+    ],
   ] as [Triple, [number, number, number], [number, number, number]][])('rotationDeg %j takes local %j to %j', (angles, local, expected) => {
     expectVectorClose(new Vector3(...local).applyMatrix4(placementRotation(new Matrix4(), angles)), expected, 1e-15);
   });
@@ -85,7 +108,9 @@ describe('placementMatrix', () => {
   it('agrees with three.js Object3D-style composition from Euler ZYX', () => {
     const angles: Triple = [-20, 110, 5];
     const position = new Vector3(0.1, 0.2, -0.3);
-    const expected = new Matrix4().makeRotationFromEuler(new Euler(rad(angles[0]), rad(angles[1]), rad(angles[2]), 'ZYX')).setPosition(position);
+    const expected = new Matrix4()
+      .makeRotationFromEuler(new Euler(rad(angles[0]), rad(angles[1]), rad(angles[2]), 'ZYX'))
+      .setPosition(position);
     expectMatrixClose(placementMatrix(new Matrix4(), [0.1, 0.2, -0.3], angles), expected, 1e-12);
   });
 });

@@ -11,15 +11,30 @@ export type Triple = readonly [number, number, number];
  */
 export function placementRotation(out: Matrix4, rotationDeg: Triple = [0, 0, 0]): Matrix4 {
   const [rx, ry, rz] = rotationDeg;
-  const cx = Math.cos(rx * MathUtils.DEG2RAD), sx = Math.sin(rx * MathUtils.DEG2RAD);
-  const cy = Math.cos(ry * MathUtils.DEG2RAD), sy = Math.sin(ry * MathUtils.DEG2RAD);
-  const cz = Math.cos(rz * MathUtils.DEG2RAD), sz = Math.sin(rz * MathUtils.DEG2RAD);
+  const cx = Math.cos(rx * MathUtils.DEG2RAD),
+    sx = Math.sin(rx * MathUtils.DEG2RAD);
+  const cy = Math.cos(ry * MathUtils.DEG2RAD),
+    sy = Math.sin(ry * MathUtils.DEG2RAD);
+  const cz = Math.cos(rz * MathUtils.DEG2RAD),
+    sz = Math.sin(rz * MathUtils.DEG2RAD);
   // Rz·Ry·Rx written out (row-major arguments of Matrix4.set).
   return out.set(
-    cz * cy, cz * sy * sx - sz * cx, cz * sy * cx + sz * sx, 0,
-    sz * cy, sz * sy * sx + cz * cx, sz * sy * cx - cz * sx, 0,
-    -sy, cy * sx, cy * cx, 0,
-    0, 0, 0, 1,
+    cz * cy,
+    cz * sy * sx - sz * cx,
+    cz * sy * cx + sz * sx,
+    0,
+    sz * cy,
+    sz * sy * sx + cz * cx,
+    sz * sy * cx - cz * sx,
+    0,
+    -sy,
+    cy * sx,
+    cy * cx,
+    0,
+    0,
+    0,
+    0,
+    1,
   );
 }
 

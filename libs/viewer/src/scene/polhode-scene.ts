@@ -18,7 +18,13 @@ export interface PolhodeScene {
 export function buildPolhodeScene(path: readonly (readonly number[])[]): PolhodeScene {
   const root = new Group();
   root.name = 'polhode';
-  const sphere = new Mesh(new SphereGeometry(1, 48, 24), sharedMaterial('polhode:sphere', () => new MeshStandardMaterial({ color: '#dfe6ee', transparent: true, opacity: 0.45, depthWrite: false })));
+  const sphere = new Mesh(
+    new SphereGeometry(1, 48, 24),
+    sharedMaterial(
+      'polhode:sphere',
+      () => new MeshStandardMaterial({ color: '#dfe6ee', transparent: true, opacity: 0.45, depthWrite: false }),
+    ),
+  );
   sphere.name = 'momentum-sphere';
   root.add(sphere);
   const positions = new Float32Array(path.length * 3);
@@ -30,7 +36,10 @@ export function buildPolhodeScene(path: readonly (readonly number[])[]): Polhode
   });
   const geometry = new BufferGeometry();
   geometry.setAttribute('position', new Float32BufferAttribute(positions, 3));
-  const line = new Line(geometry, sharedMaterial('polhode:path', () => new LineBasicMaterial({ color: '#1b1f24' })));
+  const line = new Line(
+    geometry,
+    sharedMaterial('polhode:path', () => new LineBasicMaterial({ color: '#1b1f24' })),
+  );
   line.name = 'polhode-path';
   root.add(line);
   AXIS_ROLES.forEach((role, i) => {
@@ -38,7 +47,10 @@ export function buildPolhodeScene(path: readonly (readonly number[])[]): Polhode
     rod.name = `axis:${role}`;
     root.add(rod);
   });
-  const marker = new Mesh(new SphereGeometry(0.05, 16, 12), sharedMaterial('polhode:marker', () => new MeshStandardMaterial({ color: VIEWER_COLOURS.momentum })));
+  const marker = new Mesh(
+    new SphereGeometry(0.05, 16, 12),
+    sharedMaterial('polhode:marker', () => new MeshStandardMaterial({ color: VIEWER_COLOURS.momentum })),
+  );
   marker.name = 'polhode-marker';
   if (path.length) marker.position.set(path[0][0], path[0][1], path[0][2]);
   root.add(marker);

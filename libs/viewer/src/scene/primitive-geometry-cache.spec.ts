@@ -18,7 +18,18 @@ describe('PrimitiveGeometryCache', () => {
     const cache = new PrimitiveGeometryCache();
     const first = cache.geometryOf(prim({ shape: 'cylinder', radius: 0.02, length: 0.3 }))!;
     cache.keepOnly();
-    const moved = cache.geometryOf(prim({ shape: 'cylinder', radius: 0.02, length: 0.3, id: 'other', position: [0.1, 0, 0], rotationDeg: [0, 90, 0], density: 2700, mode: 'remove' }))!;
+    const moved = cache.geometryOf(
+      prim({
+        shape: 'cylinder',
+        radius: 0.02,
+        length: 0.3,
+        id: 'other',
+        position: [0.1, 0, 0],
+        rotationDeg: [0, 90, 0],
+        density: 2700,
+        mode: 'remove',
+      }),
+    )!;
     expect(moved).toBe(first);
     expect(first.userData[CACHED_GEOMETRY]).toBe(true);
   });
@@ -54,7 +65,21 @@ describe('PrimitiveGeometryCache', () => {
 
   it('does not keep inline meshes (their key would be the whole vertex list)', () => {
     const cache = new PrimitiveGeometryCache();
-    const mesh = prim({ shape: 'mesh', vertices: [[0, 0, 0], [1, 0, 0], [0, 1, 0], [0, 0, 1]], triangles: [[0, 2, 1], [0, 1, 3], [0, 3, 2], [1, 2, 3]] });
+    const mesh = prim({
+      shape: 'mesh',
+      vertices: [
+        [0, 0, 0],
+        [1, 0, 0],
+        [0, 1, 0],
+        [0, 0, 1],
+      ],
+      triangles: [
+        [0, 2, 1],
+        [0, 1, 3],
+        [0, 3, 2],
+        [1, 2, 3],
+      ],
+    });
     const a = cache.geometryOf(mesh)!;
     cache.keepOnly();
     expect(cache.geometryOf(mesh)).not.toBe(a);

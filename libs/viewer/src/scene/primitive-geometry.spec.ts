@@ -7,7 +7,12 @@ import { primitiveGeometry } from './primitive-geometry';
 // frustum πh(R² + Rr + r²)/3, sphere 4πr³/3, ellipsoid 4πabc/3, torus 2π²Rr², capsule
 // πr²L + 4πr³/3). A tessellated solid falls short of them by the faceting error, well under 1 %
 // at 48 segments; the signed volume is positive only when every face points outwards.
-const base = { position: [0, 0, 0] as [number, number, number], rotationDeg: [0, 0, 0] as [number, number, number], mode: 'add' as const, density: 1000 };
+const base = {
+  position: [0, 0, 0] as [number, number, number],
+  rotationDeg: [0, 0, 0] as [number, number, number],
+  mode: 'add' as const,
+  density: 1000,
+};
 const prim = (p: Record<string, unknown>) => ({ ...base, id: 'p', ...p }) as unknown as Primitive;
 
 function bounds(g: BufferGeometry): Box3 {
@@ -32,7 +37,8 @@ function expectBox(g: BufferGeometry, min: number[], max: number[], tolerance = 
   [b.max.x, b.max.y, b.max.z].forEach((v, i) => expect(Math.abs(v - max[i])).toBeLessThanOrEqual(tolerance));
 }
 
-const within = (actual: number, expected: number, relative: number) => expect(Math.abs(actual - expected) / expected).toBeLessThanOrEqual(relative);
+const within = (actual: number, expected: number, relative: number) =>
+  expect(Math.abs(actual - expected) / expected).toBeLessThanOrEqual(relative);
 
 describe('primitiveGeometry', () => {
   it('draws a box centred with its edges along x, y, z', () => {
@@ -71,7 +77,9 @@ describe('primitiveGeometry', () => {
   it('draws a frustum with its top radius at +z', () => {
     const g = primitiveGeometry(prim({ shape: 'cone', radius: 0.03, topRadius: 0.01, length: 0.05 }))!;
     const pos = g.getAttribute('position');
-    const top = Array.from({ length: pos.count }, (_, i) => i).filter((i) => Math.abs(pos.getZ(i) - 0.05) < 1e-9).map((i) => Math.hypot(pos.getX(i), pos.getY(i)));
+    const top = Array.from({ length: pos.count }, (_, i) => i)
+      .filter((i) => Math.abs(pos.getZ(i) - 0.05) < 1e-9)
+      .map((i) => Math.hypot(pos.getX(i), pos.getY(i)));
     expect(Math.max(...top)).toBeCloseTo(0.01, 9);
     within(signedVolume(g), (Math.PI * 0.05 * (0.03 ** 2 + 0.03 * 0.01 + 0.01 ** 2)) / 3, 0.01);
   });
@@ -100,13 +108,32 @@ describe('primitiveGeometry', () => {
 
   it('builds an inline mesh from its vertices and triangles, scaled', () => {
     // A right tetrahedron with legs of 10 (mm, scale 0.001): volume 10³/6 mm³.
-    const g = primitiveGeometry(prim({ shape: 'mesh', scale: 0.001, vertices: [[0, 0, 0], [10, 0, 0], [0, 10, 0], [0, 0, 10]], triangles: [[0, 2, 1], [0, 1, 3], [0, 3, 2], [1, 2, 3]] }))!;
+    const g = primitiveGeometry(
+      prim({
+        shape: 'mesh',
+        scale: 0.001,
+        vertices: [
+          [0, 0, 0],
+          [10, 0, 0],
+          [0, 10, 0],
+          [0, 0, 10],
+        ],
+        triangles: [
+          [0, 2, 1],
+          [0, 1, 3],
+          [0, 3, 2],
+          [1, 2, 3],
+        ],
+      }),
+    )!;
     expectBox(g, [0, 0, 0], [0.01, 0.01, 0.01], 1e-9);
     within(signedVolume(g), 1e-6 / 6, 1e-6);
   });
 
   it('has no geometry for a point mass or an uploaded mesh', () => {
-    expect(primitiveGeometry({ id: 'tape', shape: 'point', mass: 0.003, position: [0, 0, 0], rotationDeg: [0, 0, 0], mode: 'add' } as Primitive)).toBeNull();
+    expect(
+      primitiveGeometry({ id: 'tape', shape: 'point', mass: 0.003, position: [0, 0, 0], rotationDeg: [0, 0, 0], mode: 'add' } as Primitive),
+    ).toBeNull();
     expect(primitiveGeometry(prim({ shape: 'mesh', meshId: 'm1', scale: 1 }))).toBeNull();
   });
 });

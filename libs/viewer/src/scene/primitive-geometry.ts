@@ -67,7 +67,11 @@ function tubeGeometry(outer: number, inner: number, length: number): BufferGeome
   return alongZ(new LatheGeometry(profile, ROUND_SEGMENTS));
 }
 
-function inlineMeshGeometry(vertices: readonly (readonly number[])[], triangles: readonly (readonly number[])[], scale: number): BufferGeometry {
+function inlineMeshGeometry(
+  vertices: readonly (readonly number[])[],
+  triangles: readonly (readonly number[])[],
+  scale: number,
+): BufferGeometry {
   const g = new BufferGeometry();
   const positions = new Float32Array(vertices.length * 3);
   vertices.forEach((v, i) => {

@@ -2,11 +2,19 @@ import { isSoftwareWebGL, resetSoftwareWebGLProbe } from './software-webgl';
 
 /** A canvas whose WebGL context names `renderer` (shaped like what browsers report, from memory). */
 function stubWebGL(renderer: string | null): jest.SpyInstance {
-  const gl = renderer === null ? null : {
-    RENDERER: 0x1f01,
-    getParameter: (p: number) => (p === 0x1f01 ? 'WebKit WebGL' : p === 0x9246 ? renderer : null),
-    getExtension: (name: string) => (name === 'WEBGL_debug_renderer_info' ? { UNMASKED_RENDERER_WEBGL: 0x9246 } : name === 'WEBGL_lose_context' ? { loseContext: () => undefined } : null),
-  };
+  const gl =
+    renderer === null
+      ? null
+      : {
+          RENDERER: 0x1f01,
+          getParameter: (p: number) => (p === 0x1f01 ? 'WebKit WebGL' : p === 0x9246 ? renderer : null),
+          getExtension: (name: string) =>
+            name === 'WEBGL_debug_renderer_info'
+              ? { UNMASKED_RENDERER_WEBGL: 0x9246 }
+              : name === 'WEBGL_lose_context'
+                ? { loseContext: () => undefined }
+                : null,
+        };
   return jest.spyOn(HTMLCanvasElement.prototype, 'getContext').mockReturnValue(gl as never);
 }
 

@@ -28,7 +28,10 @@ export class ViewerStage {
   private disposed = false;
 
   /** Throws when WebGL cannot start (the caller shows its text alternative instead). */
-  constructor(private readonly canvas: HTMLCanvasElement, background: string) {
+  constructor(
+    private readonly canvas: HTMLCanvasElement,
+    background: string,
+  ) {
     // Smooth edges where a GPU draws; on a CPU renderer multisampling costs more than the drawing.
     this.renderer = new WebGLRenderer({ canvas, antialias: !isSoftwareWebGL(), preserveDrawingBuffer: true, powerPreference: 'low-power' });
     this.renderer.setPixelRatio(Math.min(globalThis.devicePixelRatio ?? 1, 2));
@@ -50,7 +53,7 @@ export class ViewerStage {
   frameSphere(radius: number, view: ViewName = 'iso'): void {
     this.radius = radius;
     const d = new Vector3(...VIEW_DIRECTIONS[view]).normalize();
-    const distance = radius / Math.sin((this.camera.fov * Math.PI) / 360) * 1.05;
+    const distance = (radius / Math.sin((this.camera.fov * Math.PI) / 360)) * 1.05;
     this.camera.position.copy(d.multiplyScalar(distance));
     this.camera.near = distance / 100;
     this.camera.far = distance * 10;

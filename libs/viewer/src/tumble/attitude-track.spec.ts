@@ -87,7 +87,11 @@ describe('attitudeAt', () => {
 describe('vectorAt and trackDuration', () => {
   it('interpolates linearly and reports the last sample time', () => {
     const times = [0, 1, 2];
-    const series = [[0, 0, 0], [1, 2, 3], [3, 2, 1]];
+    const series = [
+      [0, 0, 0],
+      [1, 2, 3],
+      [3, 2, 1],
+    ];
     expect(vectorAt([0, 0, 0], series, times, 1.5)).toEqual([2, 2, 2]);
     expect(trackDuration({ times })).toBe(2);
     expect(trackDuration({ times: [] })).toBe(0);
@@ -105,7 +109,26 @@ describe('turnOvers', () => {
   });
 
   it('skips values inside the dead band', () => {
-    expect(turnOvers([[0, 1, 0], [0, 0.01, 0], [0, -0.01, 0], [0, 1, 0]], 1)).toBe(0);
-    expect(turnOvers([[0, 1, 0], [0, -1, 0], [0, 1, 0]], 1)).toBe(2);
+    expect(
+      turnOvers(
+        [
+          [0, 1, 0],
+          [0, 0.01, 0],
+          [0, -0.01, 0],
+          [0, 1, 0],
+        ],
+        1,
+      ),
+    ).toBe(0);
+    expect(
+      turnOvers(
+        [
+          [0, 1, 0],
+          [0, -1, 0],
+          [0, 1, 0],
+        ],
+        1,
+      ),
+    ).toBe(2);
   });
 });

@@ -19,7 +19,8 @@ export function trackPosition(times: readonly number[], t: number): TrackPositio
   if (n === 0) throw new RangeError('the simulation holds no samples');
   if (!(t > times[0])) return { index: 0, fraction: 0 };
   if (t >= times[n - 1]) return { index: n - 1, fraction: 0 };
-  let lo = 0, hi = n - 1;
+  let lo = 0,
+    hi = n - 1;
   while (hi - lo > 1) {
     const mid = (lo + hi) >> 1;
     if (times[mid] <= t) lo = mid;
@@ -49,7 +50,12 @@ export function attitudeAt(out: Quaternion, track: Track, t: number): Quaternion
 }
 
 /** A 3-vector series (ω, polhode) at time `t`, linearly interpolated, into `out`. */
-export function vectorAt(out: [number, number, number], series: readonly (readonly number[])[], times: readonly number[], t: number): [number, number, number] {
+export function vectorAt(
+  out: [number, number, number],
+  series: readonly (readonly number[])[],
+  times: readonly number[],
+  t: number,
+): [number, number, number] {
   const { index, fraction } = trackPosition(times, t);
   const a = series[index];
   const b = fraction === 0 ? a : series[index + 1];
@@ -69,7 +75,8 @@ export function trackDuration(track: Pick<Track, 'times'>): number {
  * Components within `deadBand` of zero are skipped so rounding does not count as a flip.
  */
 export function turnOvers(polhode: readonly (readonly number[])[], axisIndex: number, deadBand = 0.05): number {
-  let last = 0, count = 0;
+  let last = 0,
+    count = 0;
   for (const p of polhode) {
     const v = p[axisIndex];
     if (Math.abs(v) < deadBand) continue;

@@ -21,11 +21,22 @@ export function omegaChartOptions(sim: Pick<SimulationResult, 'times' | 'omega'>
   return {
     animation: false,
     textStyle: CHART_TEXT,
-    aria: { enabled: true, label: { description: 'Angular velocity components ω1, ω2 and ω3 in the body frame, in rad/s, against time in seconds.' } },
+    aria: {
+      enabled: true,
+      label: { description: 'Angular velocity components ω1, ω2 and ω3 in the body frame, in rad/s, against time in seconds.' },
+    },
     legend: { top: 0, textStyle: CHART_TEXT },
     grid: { left: 56, right: 16, top: 36, bottom: 40 },
     tooltip: { trigger: 'axis', valueFormatter: (v: unknown) => (typeof v === 'number' ? `${v.toFixed(3)} rad/s` : String(v)) },
-    xAxis: { type: 'value', name: 'time (s)', nameLocation: 'middle', nameGap: 26, min: 0, max: n ? sim.times[n - 1] : 1, axisLabel: CHART_TEXT },
+    xAxis: {
+      type: 'value',
+      name: 'time (s)',
+      nameLocation: 'middle',
+      nameGap: 26,
+      min: 0,
+      max: n ? sim.times[n - 1] : 1,
+      axisLabel: CHART_TEXT,
+    },
     yAxis: { type: 'value', name: 'ω (rad/s)', nameLocation: 'middle', nameGap: 42, axisLabel: CHART_TEXT },
     series: AXIS_ROLES.map((role, k) => ({
       name: SERIES_NAMES[k],

@@ -2,7 +2,8 @@ import type { SpinReport } from '@tumblewise/engine';
 import type { PartDocument } from '@tumblewise/shared';
 import { PREVIEW_SAMPLE_BUDGET, tumbleRequest } from './tumble-request';
 
-const doc = (rate: number) => ({ primitives: [], spin: { axis: [1, 0, 0], rate, misalignmentDeg: 1 }, dissipative: false }) as unknown as PartDocument;
+const doc = (rate: number) =>
+  ({ primitives: [], spin: { axis: [1, 0, 0], rate, misalignmentDeg: 1 }, dissipative: false }) as unknown as PartDocument;
 const report = (growthRate: number | null) => ({ spin: { growthRate } }) as unknown as SpinReport;
 
 describe('tumbleRequest', () => {

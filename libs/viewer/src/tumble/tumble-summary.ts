@@ -11,7 +11,11 @@ const fmt = (x: number, digits = 2) => Number(x.toPrecision(digits)).toString();
  * what the animation shows — read from the simulated motion itself (how often the angular momentum
  * changed sides in the body), not from the prediction.
  */
-export function tumbleSummary(report: SpinReport, sim: Pick<SimulationResult, 'times' | 'polhode' | 'flipTime'> | null, misalignmentDeg: number): string {
+export function tumbleSummary(
+  report: SpinReport,
+  sim: Pick<SimulationResult, 'times' | 'polhode' | 'flipTime'> | null,
+  misalignmentDeg: number,
+): string {
   const verdict = `Verdict: ${VERDICT_WORDS[report.spin.verdict]}. ${report.spin.explanation}`.trim();
   if (!sim || sim.times.length === 0) return verdict;
   const seconds = sim.times[sim.times.length - 1];

@@ -23,21 +23,43 @@ export async function up(qi: QueryInterface, sequelize: Sequelize): Promise<void
     await add('settings', { type: DataTypes.JSONB, allowNull: false, defaultValue: {} });
     await add('last_activity_at', { type: DataTypes.DATE, allowNull: true });
     await qi.addIndex('workspaces', ['customer_id'], { transaction });
-    await qi.createTable('billing_events', {
-      id: { type: DataTypes.STRING(80), primaryKey: true, allowNull: false },
-      type: { type: DataTypes.STRING(80), allowNull: false },
-      workspace_id: { type: DataTypes.UUID, allowNull: true, references: { model: 'workspaces', key: 'id' }, onDelete: 'SET NULL' },
-      provider_created_at: { type: DataTypes.DATE, allowNull: false },
-      applied: { type: DataTypes.BOOLEAN, allowNull: false },
-      received_at: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
-    }, { transaction });
+    await qi.createTable(
+      'billing_events',
+      {
+        id: { type: DataTypes.STRING(80), primaryKey: true, allowNull: false },
+        type: { type: DataTypes.STRING(80), allowNull: false },
+        workspace_id: { type: DataTypes.UUID, allowNull: true, references: { model: 'workspaces', key: 'id' }, onDelete: 'SET NULL' },
+        provider_created_at: { type: DataTypes.DATE, allowNull: false },
+        applied: { type: DataTypes.BOOLEAN, allowNull: false },
+        received_at: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
+      },
+      { transaction },
+    );
   });
 }
 
 export async function down(qi: QueryInterface): Promise<void> {
   await qi.dropTable('billing_events');
-  for (const c of ['plan_id', 'seats', 'customer_id', 'subscription_id', 'subscription_item_id', 'subscription_status', 'cancel_at_period_end', 'current_period_end',
-    'trial_ends_at', 'card_brand', 'card_last4', 'card_exp_month', 'card_exp_year', 'past_due_since', 'billing_event_at', 'suspended_reason', 'settings', 'last_activity_at']) {
+  for (const c of [
+    'plan_id',
+    'seats',
+    'customer_id',
+    'subscription_id',
+    'subscription_item_id',
+    'subscription_status',
+    'cancel_at_period_end',
+    'current_period_end',
+    'trial_ends_at',
+    'card_brand',
+    'card_last4',
+    'card_exp_month',
+    'card_exp_year',
+    'past_due_since',
+    'billing_event_at',
+    'suspended_reason',
+    'settings',
+    'last_activity_at',
+  ]) {
     await qi.removeColumn('workspaces', c);
   }
 }

@@ -4,7 +4,10 @@ import type { QueryInterface, Sequelize } from 'sequelize';
 export const AUTH_CHANGED_CHANNEL = 'auth_changed';
 
 /** The tables whose changes are announced, and the column holding the user's id. */
-const ANNOUNCING_TABLES = [{ table: 'users', userId: 'id' }, { table: 'sign_in_sessions', userId: 'user_id' }];
+const ANNOUNCING_TABLES = [
+  { table: 'users', userId: 'id' },
+  { table: 'sign_in_sessions', userId: 'user_id' },
+];
 
 /**
  * Every update or deletion of a user or a sign-in session announces the user's id on
@@ -14,14 +17,20 @@ const ANNOUNCING_TABLES = [{ table: 'users', userId: 'id' }, { table: 'sign_in_s
 export async function up(_qi: QueryInterface, sequelize: Sequelize): Promise<void> {
   await sequelize.transaction(async (transaction) => {
     for (const { table, userId } of ANNOUNCING_TABLES) {
-      await sequelize.query(`
+      await sequelize.query(
+        `
         CREATE FUNCTION ${table}_announce_auth_change() RETURNS trigger LANGUAGE plpgsql AS $$
         BEGIN
           PERFORM pg_notify('${AUTH_CHANGED_CHANNEL}', OLD.${userId}::text);
           RETURN NULL;
-        END $$`, { transaction });
-      await sequelize.query(`CREATE TRIGGER ${table}_announce_auth_change AFTER UPDATE OR DELETE ON ${table}
-        FOR EACH ROW EXECUTE FUNCTION ${table}_announce_auth_change()`, { transaction });
+        END $$`,
+        { transaction },
+      );
+      await sequelize.query(
+        `CREATE TRIGGER ${table}_announce_auth_change AFTER UPDATE OR DELETE ON ${table}
+        FOR EACH ROW EXECUTE FUNCTION ${table}_announce_auth_change()`,
+        { transaction },
+      );
     }
   });
 }

@@ -47,12 +47,21 @@ export function rangeCheck(
   limit: { min?: number; max?: number },
   missing = 'needs a grip frame (grip.point, grip.axis, grip.faceNormal)',
 ): CategoryCheck {
-  if (value === null || !Number.isFinite(value)) return { ...base, value: null, limit, status: 'not-evaluated', indicative: true, note: missing };
-  const ok = (limit.min === undefined || value >= limit.min * (1 - LIMIT_SLACK)) && (limit.max === undefined || value <= limit.max * (1 + LIMIT_SLACK));
+  if (value === null || !Number.isFinite(value))
+    return { ...base, value: null, limit, status: 'not-evaluated', indicative: true, note: missing };
+  const ok =
+    (limit.min === undefined || value >= limit.min * (1 - LIMIT_SLACK)) &&
+    (limit.max === undefined || value <= limit.max * (1 + LIMIT_SLACK));
   return { ...base, value, limit, status: ok ? 'pass' : 'fail', indicative: true };
 }
 
 /** An informational figure with no limit. */
 export function infoCheck(base: Omit<CategoryCheck, 'status' | 'indicative' | 'value' | 'limit'>, value: number | null): CategoryCheck {
-  return { ...base, value: value !== null && Number.isFinite(value) ? value : null, limit: {}, status: value === null ? 'not-evaluated' : 'info', indicative: true };
+  return {
+    ...base,
+    value: value !== null && Number.isFinite(value) ? value : null,
+    limit: {},
+    status: value === null ? 'not-evaluated' : 'info',
+    indicative: true,
+  };
 }

@@ -3,7 +3,7 @@ import { rangeCheck, type CategoryCheck, type CheckContext } from './category-ch
 
 const PDGA = 'PDGA Technical Standards';
 const MAX_MASS = 200 * GRAM;
-const MASS_PER_DIAMETER = 8.3 * GRAM / CENTIMETRE;
+const MASS_PER_DIAMETER = (8.3 * GRAM) / CENTIMETRE;
 
 /**
  * Flying disc: diameter 21–40 cm, mass ≤ 200 g and ≤ 8.3 g per cm of diameter; the disc is meant to
@@ -15,7 +15,11 @@ export function flyingDiscChecks(c: CheckContext): CategoryCheck[] {
   return [
     rangeCheck({ id: 'flying-disc.diameter', title: 'Diameter', rule: `${PDGA}: 21–40 cm`, unit: 'm' }, diameter, { min: 0.21, max: 0.4 }),
     rangeCheck({ id: 'flying-disc.mass', title: 'Mass', rule: `${PDGA}: at most 200 g`, unit: 'kg' }, c.body.mass, { max: MAX_MASS }),
-    rangeCheck({ id: 'flying-disc.mass-per-diameter', title: 'Mass per diameter', rule: `${PDGA}: at most 8.3 g per cm of diameter`, unit: 'kg/m' }, c.body.mass / diameter, { max: MASS_PER_DIAMETER }),
+    rangeCheck(
+      { id: 'flying-disc.mass-per-diameter', title: 'Mass per diameter', rule: `${PDGA}: at most 8.3 g per cm of diameter`, unit: 'kg/m' },
+      c.body.mass / diameter,
+      { max: MASS_PER_DIAMETER },
+    ),
     {
       id: 'flying-disc.spin-axis',
       title: 'Spin about the symmetry (major) axis',

@@ -14,7 +14,8 @@ const LIMITS = {
 export function javelinChecks(c: CheckContext): CategoryCheck[] {
   const l = LIMITS[c.division];
   const who = c.division === 'men' ? "men's" : "women's";
-  let length: number | null = null, fromTip: number | null = null;
+  let length: number | null = null,
+    fromTip: number | null = null;
   if (c.grip) {
     const u = c.grip.axis;
     length = c.extent(u);
@@ -22,8 +23,23 @@ export function javelinChecks(c: CheckContext): CategoryCheck[] {
     fromTip = c.reach(u) - (com[0] * u[0] + com[1] * u[1] + com[2] * u[2]);
   }
   return [
-    rangeCheck({ id: 'javelin.mass', title: `Mass (${who})`, rule: `${WA}: at least ${l.mass * 1000} g`, unit: 'kg' }, c.body.mass, { min: l.mass }),
-    rangeCheck({ id: 'javelin.length', title: `Overall length (${who})`, rule: `${WA}: ${l.length[0]}–${l.length[1]} m`, unit: 'm' }, length, { min: l.length[0], max: l.length[1] }),
-    rangeCheck({ id: 'javelin.centre-of-gravity', title: `Centre of gravity from the tip (${who})`, rule: `${WA}: ${l.cg[0]}–${l.cg[1]} m`, unit: 'm' }, fromTip, { min: l.cg[0], max: l.cg[1] }),
+    rangeCheck({ id: 'javelin.mass', title: `Mass (${who})`, rule: `${WA}: at least ${l.mass * 1000} g`, unit: 'kg' }, c.body.mass, {
+      min: l.mass,
+    }),
+    rangeCheck(
+      { id: 'javelin.length', title: `Overall length (${who})`, rule: `${WA}: ${l.length[0]}–${l.length[1]} m`, unit: 'm' },
+      length,
+      { min: l.length[0], max: l.length[1] },
+    ),
+    rangeCheck(
+      {
+        id: 'javelin.centre-of-gravity',
+        title: `Centre of gravity from the tip (${who})`,
+        rule: `${WA}: ${l.cg[0]}–${l.cg[1]} m`,
+        unit: 'm',
+      },
+      fromTip,
+      { min: l.cg[0], max: l.cg[1] },
+    ),
   ];
 }

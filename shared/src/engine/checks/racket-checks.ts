@@ -13,7 +13,18 @@ export function racketChecks(c: CheckContext): CategoryCheck[] {
   return [
     rangeCheck({ id: 'racket.length', title: 'Overall length', rule: `${ITF}: at most 29 in`, unit: 'm' }, length, { max: MAX_LENGTH }),
     rangeCheck({ id: 'racket.width', title: 'Overall width', rule: `${ITF}: at most 12.5 in`, unit: 'm' }, width, { max: MAX_WIDTH }),
-    infoCheck({ id: 'racket.swingweight', title: 'Swingweight (axis 10 cm from the butt)', rule: 'common practice in racket sports', unit: 'kg·m²' }, c.trade?.swingweight ?? null),
-    infoCheck({ id: 'racket.twistweight', title: 'Twistweight (about the long axis)', rule: 'common practice in racket sports', unit: 'kg·m²' }, c.trade?.twistweight ?? null),
+    infoCheck(
+      {
+        id: 'racket.swingweight',
+        title: 'Swingweight (axis 10 cm from the butt)',
+        rule: 'common practice in racket sports',
+        unit: 'kg·m²',
+      },
+      c.trade?.swingweight ?? null,
+    ),
+    infoCheck(
+      { id: 'racket.twistweight', title: 'Twistweight (about the long axis)', rule: 'common practice in racket sports', unit: 'kg·m²' },
+      c.trade?.twistweight ?? null,
+    ),
   ];
 }

@@ -8,7 +8,11 @@ import { createBody, type Body } from './body';
  * Precondition: Σ m_k ≠ 0 (the caller refuses mass ≤ 0). `out` may be one of the inputs.
  */
 export function composeBodies(out: Body = createBody(), bodies: readonly Body[], count = bodies.length): Body {
-  let m = 0, v = 0, mx = 0, my = 0, mz = 0;
+  let m = 0,
+    v = 0,
+    mx = 0,
+    my = 0,
+    mz = 0;
   for (let k = 0; k < count; k++) {
     const b = bodies[k];
     m += b.mass;
@@ -17,11 +21,21 @@ export function composeBodies(out: Body = createBody(), bodies: readonly Body[],
     my += b.mass * b.center[1];
     mz += b.mass * b.center[2];
   }
-  const cx = mx / m, cy = my / m, cz = mz / m;
-  let i00 = 0, i11 = 0, i22 = 0, i01 = 0, i02 = 0, i12 = 0;
+  const cx = mx / m,
+    cy = my / m,
+    cz = mz / m;
+  let i00 = 0,
+    i11 = 0,
+    i22 = 0,
+    i01 = 0,
+    i02 = 0,
+    i12 = 0;
   for (let k = 0; k < count; k++) {
-    const b = bodies[k], j = b.inertia;
-    const dx = b.center[0] - cx, dy = b.center[1] - cy, dz = b.center[2] - cz;
+    const b = bodies[k],
+      j = b.inertia;
+    const dx = b.center[0] - cx,
+      dy = b.center[1] - cy,
+      dz = b.center[2] - cz;
     i00 += j[0] + b.mass * (dy * dy + dz * dz);
     i11 += j[4] + b.mass * (dx * dx + dz * dz);
     i22 += j[8] + b.mass * (dx * dx + dy * dy);

@@ -15,7 +15,19 @@ const I3 = identity(mat3());
 const len = fc.double({ min: 0.01, max: 0.5, noNaN: true });
 const deg = fc.double({ min: -180, max: 180, noNaN: true });
 const coord = fc.double({ min: -0.5, max: 0.5, noNaN: true });
-const pieceArb = fc.record({ kind: fc.constantFrom('box', 'cylinder'), a: len, b: len, c: len, rx: deg, ry: deg, rz: deg, x: coord, y: coord, z: coord, rho: fc.double({ min: 100, max: 8000, noNaN: true }) });
+const pieceArb = fc.record({
+  kind: fc.constantFrom('box', 'cylinder'),
+  a: len,
+  b: len,
+  c: len,
+  rx: deg,
+  ry: deg,
+  rz: deg,
+  x: coord,
+  y: coord,
+  z: coord,
+  rho: fc.double({ min: 100, max: 8000, noNaN: true }),
+});
 type Piece = typeof pieceArb extends fc.Arbitrary<infer T> ? T : never;
 
 function place(p: Piece, outer = I3, shift = [0, 0, 0]): Body {
@@ -29,35 +41,66 @@ function place(p: Piece, outer = I3, shift = [0, 0, 0]): Body {
 describe('composition by the parallel-axis theorem (Abdulghany, Am. J. Phys. 85, 791 (2017))', () => {
   it('property: principal moments are invariant under rotation and translation of the whole part', () => {
     fc.assert(
-      fc.property(fc.array(pieceArb, { minLength: 1, maxLength: 6 }), deg, deg, deg, coord, coord, coord, (pieces, gx, gy, gz, tx, ty, tz) => {
-        const a = principalAxes(undefined, composeBodies(undefined, pieces.map((p) => place(p))).inertia);
-        const R = rotationFromDegrees(mat3(), gx, gy, gz);
-        const b = principalAxes(undefined, composeBodies(undefined, pieces.map((p) => place(p, R, [tx * 1e3, ty, tz]))).inertia);
-        expectArrayClose(b.moments, a.moments, 1e-10, a.moments[0]);
-      }),
+      fc.property(
+        fc.array(pieceArb, { minLength: 1, maxLength: 6 }),
+        deg,
+        deg,
+        deg,
+        coord,
+        coord,
+        coord,
+        (pieces, gx, gy, gz, tx, ty, tz) => {
+          const a = principalAxes(
+            undefined,
+            composeBodies(
+              undefined,
+              pieces.map((p) => place(p)),
+            ).inertia,
+          );
+          const R = rotationFromDegrees(mat3(), gx, gy, gz);
+          const b = principalAxes(
+            undefined,
+            composeBodies(
+              undefined,
+              pieces.map((p) => place(p, R, [tx * 1e3, ty, tz])),
+            ).inertia,
+          );
+          expectArrayClose(b.moments, a.moments, 1e-10, a.moments[0]);
+        },
+      ),
       { numRuns: 150 },
     );
   });
 
   it('property: a box split in two along any edge gives the same tensor and centre as the whole box', () => {
     fc.assert(
-      fc.property(len, len, len, fc.double({ min: 0.05, max: 0.95, noNaN: true }), fc.constantFrom(0, 1, 2), deg, deg, deg, (a, b, c, f, axis, rx, ry, rz) => {
-        const R = rotationFromDegrees(mat3(), rx, ry, rz);
-        const dims = [a, b, c];
-        const whole = placeSolid(undefined, boxSolid(createSolid(), a, b, c), 700, R, [0.1, 0.2, 0.3]);
-        const parts = [f, 1 - f].map((share, k) => {
-          const d = [...dims];
-          d[axis] = dims[axis] * share;
-          const off = [0, 0, 0];
-          off[axis] = k === 0 ? -dims[axis] / 2 + d[axis] / 2 : dims[axis] / 2 - d[axis] / 2;
-          const pos = [0, 1, 2].map((i) => [0.1, 0.2, 0.3][i] + R[3 * i] * off[0] + R[3 * i + 1] * off[1] + R[3 * i + 2] * off[2]);
-          return placeSolid(undefined, boxSolid(createSolid(), d[0], d[1], d[2]), 700, R, pos);
-        });
-        const sum = composeBodies(undefined, parts);
-        expectRelClose(sum.mass, whole.mass, 1e-13);
-        expectArrayClose(sum.center, whole.center, 1e-13, 1);
-        expectArrayClose(sum.inertia, whole.inertia, 1e-11, Math.max(whole.inertia[0], whole.inertia[4], whole.inertia[8]));
-      }),
+      fc.property(
+        len,
+        len,
+        len,
+        fc.double({ min: 0.05, max: 0.95, noNaN: true }),
+        fc.constantFrom(0, 1, 2),
+        deg,
+        deg,
+        deg,
+        (a, b, c, f, axis, rx, ry, rz) => {
+          const R = rotationFromDegrees(mat3(), rx, ry, rz);
+          const dims = [a, b, c];
+          const whole = placeSolid(undefined, boxSolid(createSolid(), a, b, c), 700, R, [0.1, 0.2, 0.3]);
+          const parts = [f, 1 - f].map((share, k) => {
+            const d = [...dims];
+            d[axis] = dims[axis] * share;
+            const off = [0, 0, 0];
+            off[axis] = k === 0 ? -dims[axis] / 2 + d[axis] / 2 : dims[axis] / 2 - d[axis] / 2;
+            const pos = [0, 1, 2].map((i) => [0.1, 0.2, 0.3][i] + R[3 * i] * off[0] + R[3 * i + 1] * off[1] + R[3 * i + 2] * off[2]);
+            return placeSolid(undefined, boxSolid(createSolid(), d[0], d[1], d[2]), 700, R, pos);
+          });
+          const sum = composeBodies(undefined, parts);
+          expectRelClose(sum.mass, whole.mass, 1e-13);
+          expectArrayClose(sum.center, whole.center, 1e-13, 1);
+          expectArrayClose(sum.inertia, whole.inertia, 1e-11, Math.max(whole.inertia[0], whole.inertia[4], whole.inertia[8]));
+        },
+      ),
       { numRuns: 150 },
     );
   });
@@ -78,7 +121,13 @@ describe('composition by the parallel-axis theorem (Abdulghany, Am. J. Phys. 85,
   it('property: triangle inequality of principal moments and positive definiteness for any added solids', () => {
     fc.assert(
       fc.property(fc.array(pieceArb, { minLength: 1, maxLength: 8 }), (pieces) => {
-        const p = principalAxes(undefined, composeBodies(undefined, pieces.map((x) => place(x))).inertia);
+        const p = principalAxes(
+          undefined,
+          composeBodies(
+            undefined,
+            pieces.map((x) => place(x)),
+          ).inertia,
+        );
         const [i1, i2, i3] = p.moments;
         expect(i3).toBeGreaterThan(0);
         expect(i2 + i3).toBeGreaterThanOrEqual(i1 * (1 - 1e-12));
@@ -90,7 +139,10 @@ describe('composition by the parallel-axis theorem (Abdulghany, Am. J. Phys. 85,
   it('property: parallel-axis consistency — the moment about a line at distance d from the centre is I_c + m d²', () => {
     fc.assert(
       fc.property(fc.array(pieceArb, { minLength: 1, maxLength: 5 }), coord, coord, (pieces, dx, dy) => {
-        const body = composeBodies(undefined, pieces.map((x) => place(x)));
+        const body = composeBodies(
+          undefined,
+          pieces.map((x) => place(x)),
+        );
         const c = body.center;
         const through = momentAboutLine(body, c, [0, 0, 1]);
         const shifted = momentAboutLine(body, [c[0] + dx, c[1] + dy, c[2] + 5], [0, 0, 1]);

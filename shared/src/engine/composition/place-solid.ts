@@ -14,8 +14,11 @@ export function placeSolid(
   rotation: ArrayLike<number>,
   position: ArrayLike<number>,
 ): Body {
-  const c = solid.centroid, r = rotation;
-  const x = c[0], y = c[1], z = c[2];
+  const c = solid.centroid,
+    r = rotation;
+  const x = c[0],
+    y = c[1],
+    z = c[2];
   out.center[0] = position[0] + r[0] * x + r[1] * y + r[2] * z;
   out.center[1] = position[1] + r[3] * x + r[4] * y + r[5] * z;
   out.center[2] = position[2] + r[6] * x + r[7] * y + r[8] * z;

@@ -62,7 +62,7 @@ describe('primitives against rapier3d-compat (float32 tolerance)', () => {
 
   it('a 200-primitive compound (seeded, rotated, offset) agrees in mass, centre and principal moments to 1e-4', () => {
     let seed = 12345;
-    const rnd = () => ((seed = (Math.imul(seed, 1664525) + 1013904223) >>> 0) / 2 ** 32);
+    const rnd = () => (seed = (Math.imul(seed, 1664525) + 1013904223) >>> 0) / 2 ** 32;
     const descs: RAPIER.ColliderDesc[] = [];
     const bodies: Body[] = [];
     for (let k = 0; k < 200; k++) {
@@ -90,9 +90,10 @@ describe('primitives against rapier3d-compat (float32 tolerance)', () => {
     expectArrayClose(p.moments, r.moments, 1e-4, p.moments[0], 'principal moments');
   });
 
-  it('our round shapes, rotated so their axis lies along y, match rapier\'s y-axis shapes including the cone centre', () => {
+  it("our round shapes, rotated so their axis lies along y, match rapier's y-axis shapes including the cone centre", () => {
     // Rapier centres its cone at half height; ours has the base at the origin, centroid h/4 above.
-    const h = 0.3, r = 0.04;
+    const h = 0.3,
+      r = 0.04;
     const b = ours(frustumSolid(createSolid(), r, 0, h), rho, Y_TO_Z, [0, -h / 2, 0]);
     const rr = rapierBody([RAPIER.ColliderDesc.cone(h / 2, r).setDensity(rho)]);
     expectArrayClose(b.center, rr.com, 1e-6, h, 'cone centre');

@@ -23,8 +23,24 @@ export function identity<T extends Mat3 | Float64Array>(out: T): T {
 
 /** out = a·b. */
 export function multiply<T extends Mat3 | Float64Array>(out: T, a: ArrayLike<number>, b: ArrayLike<number>): T {
-  const a00 = a[0], a01 = a[1], a02 = a[2], a10 = a[3], a11 = a[4], a12 = a[5], a20 = a[6], a21 = a[7], a22 = a[8];
-  const b00 = b[0], b01 = b[1], b02 = b[2], b10 = b[3], b11 = b[4], b12 = b[5], b20 = b[6], b21 = b[7], b22 = b[8];
+  const a00 = a[0],
+    a01 = a[1],
+    a02 = a[2],
+    a10 = a[3],
+    a11 = a[4],
+    a12 = a[5],
+    a20 = a[6],
+    a21 = a[7],
+    a22 = a[8];
+  const b00 = b[0],
+    b01 = b[1],
+    b02 = b[2],
+    b10 = b[3],
+    b11 = b[4],
+    b12 = b[5],
+    b20 = b[6],
+    b21 = b[7],
+    b22 = b[8];
   out[0] = a00 * b00 + a01 * b10 + a02 * b20;
   out[1] = a00 * b01 + a01 * b11 + a02 * b21;
   out[2] = a00 * b02 + a01 * b12 + a02 * b22;
@@ -39,7 +55,9 @@ export function multiply<T extends Mat3 | Float64Array>(out: T, a: ArrayLike<num
 
 /** out = aᵀ. */
 export function transpose<T extends Mat3 | Float64Array>(out: T, a: ArrayLike<number>): T {
-  const a01 = a[1], a02 = a[2], a12 = a[5];
+  const a01 = a[1],
+    a02 = a[2],
+    a12 = a[5];
   out[0] = a[0];
   out[4] = a[4];
   out[8] = a[8];
@@ -56,8 +74,24 @@ export function transpose<T extends Mat3 | Float64Array>(out: T, a: ArrayLike<nu
 export function rotateTensor<T extends Mat3 | Float64Array>(out: T, r: ArrayLike<number>, s: ArrayLike<number>): T {
   const t = scratch;
   multiply(t, r, s);
-  const r00 = r[0], r01 = r[1], r02 = r[2], r10 = r[3], r11 = r[4], r12 = r[5], r20 = r[6], r21 = r[7], r22 = r[8];
-  const t00 = t[0], t01 = t[1], t02 = t[2], t10 = t[3], t11 = t[4], t12 = t[5], t20 = t[6], t21 = t[7], t22 = t[8];
+  const r00 = r[0],
+    r01 = r[1],
+    r02 = r[2],
+    r10 = r[3],
+    r11 = r[4],
+    r12 = r[5],
+    r20 = r[6],
+    r21 = r[7],
+    r22 = r[8];
+  const t00 = t[0],
+    t01 = t[1],
+    t02 = t[2],
+    t10 = t[3],
+    t11 = t[4],
+    t12 = t[5],
+    t20 = t[6],
+    t21 = t[7],
+    t22 = t[8];
   out[0] = t00 * r00 + t01 * r01 + t02 * r02;
   out[1] = t00 * r10 + t01 * r11 + t02 * r12;
   out[2] = t00 * r20 + t01 * r21 + t02 * r22;
@@ -73,7 +107,9 @@ const scratch: Mat3 = mat3();
 
 /** out = M·v. */
 export function transformVec3<T extends number[] | Float64Array>(out: T, m: ArrayLike<number>, v: ArrayLike<number>): T {
-  const x = v[0], y = v[1], z = v[2];
+  const x = v[0],
+    y = v[1],
+    z = v[2];
   out[0] = m[0] * x + m[1] * y + m[2] * z;
   out[1] = m[3] * x + m[4] * y + m[5] * z;
   out[2] = m[6] * x + m[7] * y + m[8] * z;
@@ -82,7 +118,9 @@ export function transformVec3<T extends number[] | Float64Array>(out: T, m: Arra
 
 /** vᵀ·M·v — for an inertia tensor and a unit vector, the moment about that axis. */
 export function quadraticForm(m: ArrayLike<number>, v: ArrayLike<number>): number {
-  const x = v[0], y = v[1], z = v[2];
+  const x = v[0],
+    y = v[1],
+    z = v[2];
   return x * (m[0] * x + m[1] * y + m[2] * z) + y * (m[3] * x + m[4] * y + m[5] * z) + z * (m[6] * x + m[7] * y + m[8] * z);
 }
 

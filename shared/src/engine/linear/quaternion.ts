@@ -16,8 +16,14 @@ export function quat(x = 0, y = 0, z = 0, w = 1): Quat {
 
 /** out = a ⊗ b (apply b first, then a). Hamilton product. */
 export function quatMultiply(out: Quat, a: ArrayLike<number>, b: ArrayLike<number>): Quat {
-  const ax = a[0], ay = a[1], az = a[2], aw = a[3];
-  const bx = b[0], by = b[1], bz = b[2], bw = b[3];
+  const ax = a[0],
+    ay = a[1],
+    az = a[2],
+    aw = a[3];
+  const bx = b[0],
+    by = b[1],
+    bz = b[2],
+    bw = b[3];
   out[0] = aw * bx + ax * bw + ay * bz - az * by;
   out[1] = aw * by - ax * bz + ay * bw + az * bx;
   out[2] = aw * bz + ax * by - ay * bx + az * bw;
@@ -32,8 +38,12 @@ export function quatMultiply(out: Quat, a: ArrayLike<number>, b: ArrayLike<numbe
  */
 export function quatRotateAboutBodyAxis(out: Quat, q: ArrayLike<number>, axis: 0 | 1 | 2, angle: number): Quat {
   const h = 0.5 * angle;
-  const s = Math.sin(h), c = Math.cos(h);
-  const qx = q[0], qy = q[1], qz = q[2], qw = q[3];
+  const s = Math.sin(h),
+    c = Math.cos(h);
+  const qx = q[0],
+    qy = q[1],
+    qz = q[2],
+    qw = q[3];
   // q ⊗ (s·e_axis, c)
   if (axis === 0) {
     out[0] = qw * s + qx * c;
@@ -67,7 +77,10 @@ export function quatNormalize(out: Quat, q: ArrayLike<number>): Quat {
 
 /** out = the rotation matrix (row-major 3×3) of the unit quaternion q. */
 export function quatToMat3(out: Float64Array, q: ArrayLike<number>): Float64Array {
-  const x = q[0], y = q[1], z = q[2], w = q[3];
+  const x = q[0],
+    y = q[1],
+    z = q[2],
+    w = q[3];
   out[0] = 1 - 2 * (y * y + z * z);
   out[1] = 2 * (x * y - z * w);
   out[2] = 2 * (x * z + y * w);
@@ -86,7 +99,9 @@ export function quatToMat3(out: Float64Array, q: ArrayLike<number>): Float64Arra
  * picks the largest of the four squared components for accuracy.
  */
 export function quatFromMat3(out: Quat, m: ArrayLike<number>): Quat {
-  const m00 = m[0], m11 = m[4], m22 = m[8];
+  const m00 = m[0],
+    m11 = m[4],
+    m22 = m[8];
   const tr = m00 + m11 + m22;
   if (tr >= m00 && tr >= m11 && tr >= m22) {
     const s = 2 * Math.sqrt(1 + tr);

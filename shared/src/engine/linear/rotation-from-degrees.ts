@@ -10,9 +10,12 @@ const DEG = Math.PI / 180;
  * Mechanics, 3rd ed., §4.4 (applied about fixed axes, so later rotations multiply on the left).
  */
 export function rotationFromDegrees<T extends Mat3 | Float64Array>(out: T, rx: number, ry: number, rz: number): T {
-  const cx = Math.cos(rx * DEG), sx = Math.sin(rx * DEG);
-  const cy = Math.cos(ry * DEG), sy = Math.sin(ry * DEG);
-  const cz = Math.cos(rz * DEG), sz = Math.sin(rz * DEG);
+  const cx = Math.cos(rx * DEG),
+    sx = Math.sin(rx * DEG);
+  const cy = Math.cos(ry * DEG),
+    sy = Math.sin(ry * DEG);
+  const cz = Math.cos(rz * DEG),
+    sz = Math.sin(rz * DEG);
   // Rz·Ry·Rx written out.
   out[0] = cz * cy;
   out[1] = cz * sy * sx - sz * cx;

@@ -23,7 +23,9 @@ export function integrateTriangleSoup(
   scale = 1,
   reference?: ArrayLike<number>,
 ): Solid {
-  let ox = 0, oy = 0, oz = 0;
+  let ox = 0,
+    oy = 0,
+    oz = 0;
   const n9 = count * 9;
   if (reference) {
     ox = reference[0];
@@ -40,13 +42,30 @@ export function integrateTriangleSoup(
     oy *= inv;
     oz *= inv;
   }
-  let v6 = 0, rx = 0, ry = 0, rz = 0, xx = 0, yy = 0, zz = 0, xy = 0, yz = 0, xz = 0;
+  let v6 = 0,
+    rx = 0,
+    ry = 0,
+    rz = 0,
+    xx = 0,
+    yy = 0,
+    zz = 0,
+    xy = 0,
+    yz = 0,
+    xz = 0;
   for (let i = 0; i < n9; i += 9) {
-    const x1 = corners[i] - ox, y1 = corners[i + 1] - oy, z1 = corners[i + 2] - oz;
-    const x2 = corners[i + 3] - ox, y2 = corners[i + 4] - oy, z2 = corners[i + 5] - oz;
-    const x3 = corners[i + 6] - ox, y3 = corners[i + 7] - oy, z3 = corners[i + 8] - oz;
+    const x1 = corners[i] - ox,
+      y1 = corners[i + 1] - oy,
+      z1 = corners[i + 2] - oz;
+    const x2 = corners[i + 3] - ox,
+      y2 = corners[i + 4] - oy,
+      z2 = corners[i + 5] - oz;
+    const x3 = corners[i + 6] - ox,
+      y3 = corners[i + 7] - oy,
+      z3 = corners[i + 8] - oz;
     const d = x1 * (y2 * z3 - z2 * y3) - y1 * (x2 * z3 - z2 * x3) + z1 * (x2 * y3 - y2 * x3);
-    const sx = x1 + x2 + x3, sy = y1 + y2 + y3, sz = z1 + z2 + z3;
+    const sx = x1 + x2 + x3,
+      sy = y1 + y2 + y3,
+      sz = z1 + z2 + z3;
     v6 += d;
     rx += d * sx;
     ry += d * sy;
@@ -66,9 +85,16 @@ export function integrateTriangleSoup(
  * indices per triangle (outward orientation = counter-clockwise seen from outside). The reference
  * point is the vertex mean.
  */
-export function integrateIndexedMesh(out: Solid = createSolid(), vertices: ArrayLike<number>, triangles: ArrayLike<number>, scale = 1): Solid {
+export function integrateIndexedMesh(
+  out: Solid = createSolid(),
+  vertices: ArrayLike<number>,
+  triangles: ArrayLike<number>,
+  scale = 1,
+): Solid {
   const nv = Math.floor(vertices.length / 3);
-  let ox = 0, oy = 0, oz = 0;
+  let ox = 0,
+    oy = 0,
+    oz = 0;
   for (let i = 0; i < nv * 3; i += 3) {
     ox += vertices[i];
     oy += vertices[i + 1];
@@ -78,14 +104,33 @@ export function integrateIndexedMesh(out: Solid = createSolid(), vertices: Array
   ox *= inv;
   oy *= inv;
   oz *= inv;
-  let v6 = 0, rx = 0, ry = 0, rz = 0, xx = 0, yy = 0, zz = 0, xy = 0, yz = 0, xz = 0;
+  let v6 = 0,
+    rx = 0,
+    ry = 0,
+    rz = 0,
+    xx = 0,
+    yy = 0,
+    zz = 0,
+    xy = 0,
+    yz = 0,
+    xz = 0;
   for (let t = 0; t + 2 < triangles.length; t += 3) {
-    const a = 3 * triangles[t], b = 3 * triangles[t + 1], c = 3 * triangles[t + 2];
-    const x1 = vertices[a] - ox, y1 = vertices[a + 1] - oy, z1 = vertices[a + 2] - oz;
-    const x2 = vertices[b] - ox, y2 = vertices[b + 1] - oy, z2 = vertices[b + 2] - oz;
-    const x3 = vertices[c] - ox, y3 = vertices[c + 1] - oy, z3 = vertices[c + 2] - oz;
+    const a = 3 * triangles[t],
+      b = 3 * triangles[t + 1],
+      c = 3 * triangles[t + 2];
+    const x1 = vertices[a] - ox,
+      y1 = vertices[a + 1] - oy,
+      z1 = vertices[a + 2] - oz;
+    const x2 = vertices[b] - ox,
+      y2 = vertices[b + 1] - oy,
+      z2 = vertices[b + 2] - oz;
+    const x3 = vertices[c] - ox,
+      y3 = vertices[c + 1] - oy,
+      z3 = vertices[c + 2] - oz;
     const d = x1 * (y2 * z3 - z2 * y3) - y1 * (x2 * z3 - z2 * x3) + z1 * (x2 * y3 - y2 * x3);
-    const sx = x1 + x2 + x3, sy = y1 + y2 + y3, sz = z1 + z2 + z3;
+    const sx = x1 + x2 + x3,
+      sy = y1 + y2 + y3,
+      sz = z1 + z2 + z3;
     v6 += d;
     rx += d * sx;
     ry += d * sy;
@@ -102,16 +147,34 @@ export function integrateIndexedMesh(out: Solid = createSolid(), vertices: Array
 
 function finish(
   out: Solid,
-  v6: number, rx: number, ry: number, rz: number,
-  xx: number, yy: number, zz: number, xy: number, yz: number, xz: number,
-  ox: number, oy: number, oz: number, scale: number,
+  v6: number,
+  rx: number,
+  ry: number,
+  rz: number,
+  xx: number,
+  yy: number,
+  zz: number,
+  xy: number,
+  yz: number,
+  xz: number,
+  ox: number,
+  oy: number,
+  oz: number,
+  scale: number,
 ): Solid {
   const v = v6 / 6;
-  const gx = v !== 0 ? rx / 24 / v : 0, gy = v !== 0 ? ry / 24 / v : 0, gz = v !== 0 ? rz / 24 / v : 0;
+  const gx = v !== 0 ? rx / 24 / v : 0,
+    gy = v !== 0 ? ry / 24 / v : 0,
+    gz = v !== 0 ? rz / 24 / v : 0;
   // Covariance about the centroid: C = ∫r rᵀ − V g gᵀ (all relative to o).
-  const cxx = xx / 120 - v * gx * gx, cyy = yy / 120 - v * gy * gy, czz = zz / 120 - v * gz * gz;
-  const cxy = xy / 120 - v * gx * gy, cyz = yz / 120 - v * gy * gz, cxz = xz / 120 - v * gx * gz;
-  const s3 = scale * scale * scale, s5 = s3 * scale * scale;
+  const cxx = xx / 120 - v * gx * gx,
+    cyy = yy / 120 - v * gy * gy,
+    czz = zz / 120 - v * gz * gz;
+  const cxy = xy / 120 - v * gx * gy,
+    cyz = yz / 120 - v * gy * gz,
+    cxz = xz / 120 - v * gx * gz;
+  const s3 = scale * scale * scale,
+    s5 = s3 * scale * scale;
   out.volume = v * s3;
   out.centroid[0] = (ox + gx) * scale;
   out.centroid[1] = (oy + gy) * scale;

@@ -8,10 +8,15 @@ import { weldVertices } from './weld-vertices';
 /** Outcome of checking and integrating a parsed mesh. */
 export type MeshAnalysis =
   | {
-    ok: true; solid: Solid; problems: MeshProblem[]; vertexCount: number; triangleCount: number; bounds: { min: [number, number, number]; max: [number, number, number] };
-    /** The welded mesh that was checked (file units), for further checks. */
-    welded: { vertices: Float64Array; triangles: Uint32Array };
-  }
+      ok: true;
+      solid: Solid;
+      problems: MeshProblem[];
+      vertexCount: number;
+      triangleCount: number;
+      bounds: { min: [number, number, number]; max: [number, number, number] };
+      /** The welded mesh that was checked (file units), for further checks. */
+      welded: { vertices: Float64Array; triangles: Uint32Array };
+    }
   | { ok: false; problems: MeshProblem[] };
 
 /**
@@ -24,7 +29,8 @@ export function meshMassProperties(mesh: ParsedMesh, scale = 1): MeshAnalysis {
   const check = validateIndexedMesh(vertices, triangles);
   if (!check.ok) return { ok: false, problems: check.problems };
   const solid = integrateIndexedMesh(createSolid(), vertices, triangles, scale);
-  const min: [number, number, number] = [Infinity, Infinity, Infinity], max: [number, number, number] = [-Infinity, -Infinity, -Infinity];
+  const min: [number, number, number] = [Infinity, Infinity, Infinity],
+    max: [number, number, number] = [-Infinity, -Infinity, -Infinity];
   for (let i = 0; i < vertices.length; i += 3) {
     for (let k = 0; k < 3; k++) {
       const v = vertices[i + k] * scale;
@@ -32,5 +38,13 @@ export function meshMassProperties(mesh: ParsedMesh, scale = 1): MeshAnalysis {
       if (v > max[k]) max[k] = v;
     }
   }
-  return { ok: true, solid, problems: check.problems, vertexCount: vertices.length / 3, triangleCount: mesh.triangleCount, bounds: { min, max }, welded: { vertices, triangles } };
+  return {
+    ok: true,
+    solid,
+    problems: check.problems,
+    vertexCount: vertices.length / 3,
+    triangleCount: mesh.triangleCount,
+    bounds: { min, max },
+    welded: { vertices, triangles },
+  };
 }

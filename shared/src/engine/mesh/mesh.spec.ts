@@ -15,8 +15,18 @@ import { weldVertices } from './weld-vertices';
 
 describe('mesh integration by signed tetrahedra (Kallay, J. Graphics Tools 11(2), 2006)', () => {
   it("Tonon's tetrahedron (J. Math. Stat. 1(1):8–11, 2005): published centroid and inertia tensor at unit density", () => {
-    const p = [[8.3322, -11.86875, 0.93355], [0.75523, 5, 16.37072], [52.61236, 5, -5.3858], [2, 5, 3]];
-    let faces = [[1, 2, 3], [0, 3, 2], [0, 1, 3], [0, 2, 1]];
+    const p = [
+      [8.3322, -11.86875, 0.93355],
+      [0.75523, 5, 16.37072],
+      [52.61236, 5, -5.3858],
+      [2, 5, 3],
+    ];
+    let faces = [
+      [1, 2, 3],
+      [0, 3, 2],
+      [0, 1, 3],
+      [0, 2, 1],
+    ];
     const e = (i: number) => [p[i][0] - p[0][0], p[i][1] - p[0][1], p[i][2] - p[0][2]];
     const [u, v, w] = [e(1), e(2), e(3)];
     const det = u[0] * (v[1] * w[2] - v[2] * w[1]) - u[1] * (v[0] * w[2] - v[2] * w[0]) + u[2] * (v[0] * w[1] - v[1] * w[0]);
@@ -29,7 +39,7 @@ describe('mesh integration by signed tetrahedra (Kallay, J. Graphics Tools 11(2)
     for (let i = 0; i < 9; i++) expectAbsClose(s.inertia[i], I[i], 2e-8 * b, `I[${i}]`);
   });
 
-  it('unit cube: V = 1, I = 1/6 about the centroid (Machinery\'s Handbook, rectangular prism), also translated by 1e6', () => {
+  it("unit cube: V = 1, I = 1/6 about the centroid (Machinery's Handbook, rectangular prism), also translated by 1e6", () => {
     for (const shift of [0, 1e6]) {
       const m = boxMesh(1, 1, 1, [shift, -shift, shift]);
       const s = integrateIndexedMesh(undefined, m.vertices, m.triangles);
@@ -42,18 +52,23 @@ describe('mesh integration by signed tetrahedra (Kallay, J. Graphics Tools 11(2)
 
   it('property: the mesh of a box equals the box primitive', () => {
     fc.assert(
-      fc.property(fc.double({ min: 0.01, max: 2, noNaN: true }), fc.double({ min: 0.01, max: 2, noNaN: true }), fc.double({ min: 0.01, max: 2, noNaN: true }), (a, b, c) => {
-        const m = boxMesh(a, b, c, [0.3, -0.2, 5]);
-        const s = integrateIndexedMesh(undefined, m.vertices, m.triangles);
-        const ref = boxSolid(createSolid(), a, b, c);
-        expectRelClose(s.volume, ref.volume, 1e-13);
-        expectArrayClose(s.inertia, ref.inertia, 1e-12, Math.max(ref.inertia[0], ref.inertia[4], ref.inertia[8]));
-      }),
+      fc.property(
+        fc.double({ min: 0.01, max: 2, noNaN: true }),
+        fc.double({ min: 0.01, max: 2, noNaN: true }),
+        fc.double({ min: 0.01, max: 2, noNaN: true }),
+        (a, b, c) => {
+          const m = boxMesh(a, b, c, [0.3, -0.2, 5]);
+          const s = integrateIndexedMesh(undefined, m.vertices, m.triangles);
+          const ref = boxSolid(createSolid(), a, b, c);
+          expectRelClose(s.volume, ref.volume, 1e-13);
+          expectArrayClose(s.inertia, ref.inertia, 1e-12, Math.max(ref.inertia[0], ref.inertia[4], ref.inertia[8]));
+        },
+      ),
       { numRuns: 200 },
     );
   });
 
-  it('a finely tessellated torus and sphere converge to their closed forms (Machinery\'s Handbook) at the polygon rate 1/n²; Richardson-extrapolated to 1e-5', () => {
+  it("a finely tessellated torus and sphere converge to their closed forms (Machinery's Handbook) at the polygon rate 1/n²; Richardson-extrapolated to 1e-5", () => {
     const torus = (n: number) => {
       const t = torusMesh(0.11, 0.02, 2 * n, n);
       return integrateIndexedMesh(undefined, t.vertices, t.triangles);
@@ -61,7 +76,8 @@ describe('mesh integration by signed tetrahedra (Kallay, J. Graphics Tools 11(2)
     const ref = torusSolid(createSolid(), 0.11, 0.02);
     const [c, f] = [torus(64), torus(128)];
     for (const k of [0, 8]) {
-      const e1 = Math.abs(c.inertia[k] - ref.inertia[k]), e2 = Math.abs(f.inertia[k] - ref.inertia[k]);
+      const e1 = Math.abs(c.inertia[k] - ref.inertia[k]),
+        e2 = Math.abs(f.inertia[k] - ref.inertia[k]);
       expect(e2).toBeLessThan(e1 / 3.5); // second order
       expectRelClose((4 * f.inertia[k] - c.inertia[k]) / 3, ref.inertia[k], 1e-5);
     }
@@ -134,7 +150,10 @@ describe('mesh validation', () => {
     const a = boxMesh(1, 1, 1, [0, 0, 0]);
     const b = boxMesh(1, 1, 1, [1, 1, 0]);
     const v = new Float64Array([...a.vertices, ...b.vertices]);
-    const { vertices, triangles } = weldVertices(Float64Array.from(toSoup({ vertices: v, triangles: Uint32Array.from([...a.triangles, ...Array.from(b.triangles, (x) => x + 8)]) })), 24);
+    const { vertices, triangles } = weldVertices(
+      Float64Array.from(toSoup({ vertices: v, triangles: Uint32Array.from([...a.triangles, ...Array.from(b.triangles, (x) => x + 8)]) })),
+      24,
+    );
     expect(validateIndexedMesh(vertices, triangles).problems.map((p) => p.code)).toContain('non_manifold');
   });
   it('degenerate triangles, NaN coordinates and no triangles', () => {
@@ -182,7 +201,13 @@ describe('parseStl', () => {
     new DataView(nan.buffer).setFloat32(84 + 50 * 3 + 16, NaN, true);
     expect(parseStl(nan).problems[0]).toMatchObject({ code: 'non_finite', firstTriangle: 3 });
     expect(parseStl(new TextEncoder().encode('hello')).problems[0].code).toBe('unreadable');
-    expect(parseStl(new TextEncoder().encode('solid x\nfacet normal 0 0 1\nouter loop\nvertex 0 0 nan\nvertex 1 0 0\nvertex 0 1 0\nendloop\nendfacet\nendsolid')).problems[0].code).toBe('non_finite');
+    expect(
+      parseStl(
+        new TextEncoder().encode(
+          'solid x\nfacet normal 0 0 1\nouter loop\nvertex 0 0 nan\nvertex 1 0 0\nvertex 0 1 0\nendloop\nendfacet\nendsolid',
+        ),
+      ).problems[0].code,
+    ).toBe('non_finite');
   });
   it('meshMassProperties reports an open mesh instead of integrating it', () => {
     const cube = toSoup(boxMesh(1, 1, 1));

@@ -48,7 +48,10 @@ export function parseStl(bytes: Uint8Array | ArrayBuffer, limits: StlLimits = {}
   if (looksAscii(b)) return parseAscii(b, maxTriangles, limits.target);
   if (b.length < 84) return fail('unreadable', 'the file is neither an ASCII STL nor long enough for a binary STL header');
   const count = new DataView(b.buffer, b.byteOffset, b.byteLength).getUint32(80, true);
-  return fail('count_mismatch', `the binary header announces ${count} triangles (${84 + 50 * count} bytes) but the file has ${b.length} bytes`);
+  return fail(
+    'count_mismatch',
+    `the binary header announces ${count} triangles (${84 + 50 * count} bytes) but the file has ${b.length} bytes`,
+  );
 }
 
 function fail(code: MeshProblem['code'], message: string): StlResult {
@@ -63,10 +66,16 @@ function parseBinary(b: Uint8Array, view: DataView, count: number, maxTriangles:
   if (count === 0) return fail('no_triangles', 'the file holds no triangles');
   if (count > maxTriangles) return fail('too_large', `the file holds ${count} triangles; at most ${maxTriangles} are accepted`);
   const corners = buffer(target, 9 * count);
-  let sx = 0, sy = 0, sz = 0, bad = 0, firstBad = -1;
+  let sx = 0,
+    sy = 0,
+    sz = 0,
+    bad = 0,
+    firstBad = -1;
   for (let t = 0, off = 96, o = 0; t < count; t++, off += 50) {
     for (let k = 0; k < 3; k++, o += 3) {
-      const x = view.getFloat32(off + 12 * k, true), y = view.getFloat32(off + 12 * k + 4, true), z = view.getFloat32(off + 12 * k + 8, true);
+      const x = view.getFloat32(off + 12 * k, true),
+        y = view.getFloat32(off + 12 * k + 4, true),
+        z = view.getFloat32(off + 12 * k + 8, true);
       corners[o] = x;
       corners[o + 1] = y;
       corners[o + 2] = z;
@@ -81,7 +90,18 @@ function parseBinary(b: Uint8Array, view: DataView, count: number, maxTriangles:
       sx = sy = sz = 0; // the mean is unused when the file is refused
     }
   }
-  if (bad > 0) return { ok: false, problems: [{ code: 'non_finite', message: `${bad} triangles have NaN or infinite coordinates (the first is triangle ${firstBad})`, count: bad, firstTriangle: firstBad }] };
+  if (bad > 0)
+    return {
+      ok: false,
+      problems: [
+        {
+          code: 'non_finite',
+          message: `${bad} triangles have NaN or infinite coordinates (the first is triangle ${firstBad})`,
+          count: bad,
+          firstTriangle: firstBad,
+        },
+      ],
+    };
   const name = new TextDecoder('latin1').decode(b.subarray(0, 80)).replace(/\0.*$/s, '').trim();
   const inv = 1 / (3 * count);
   return { ok: true, mesh: { corners, triangleCount: count, format: 'binary', mean: [sx * inv, sy * inv, sz * inv], name }, problems: [] };
@@ -100,7 +120,7 @@ function parseAscii(b: Uint8Array, maxTriangles: number, target?: Float32Array):
   const text = new TextDecoder('latin1').decode(b);
   const name = (/^\s*solid[ \t]*([^\r\n]*)/i.exec(text)?.[1] ?? '').trim();
   let n = 0;
-  for (VERTEX.lastIndex = 0; VERTEX.exec(text); ) n++;
+  for (VERTEX.lastIndex = 0; VERTEX.exec(text);) n++;
   if (n === 0) return fail('no_triangles', 'the file holds no triangles');
   if (n % 3 !== 0) return fail('unreadable', `the file lists ${n} vertices, not a multiple of three`);
   const count = n / 3;
@@ -108,11 +128,18 @@ function parseAscii(b: Uint8Array, maxTriangles: number, target?: Float32Array):
   const facets = (text.match(/endfacet/gi) ?? []).length;
   if (facets !== count) return fail('unreadable', `the file has ${facets} facets but ${count} vertex triples`);
   const corners = buffer(target, 3 * n);
-  let o = 0, sx = 0, sy = 0, sz = 0, bad = 0, firstBad = -1;
+  let o = 0,
+    sx = 0,
+    sy = 0,
+    sz = 0,
+    bad = 0,
+    firstBad = -1;
   for (VERTEX.lastIndex = 0, n = 0; ; n++) {
     const m = VERTEX.exec(text);
     if (!m) break;
-    const x = Number(m[1]), y = Number(m[2]), z = Number(m[3]);
+    const x = Number(m[1]),
+      y = Number(m[2]),
+      z = Number(m[3]);
     if (!Number.isFinite(x) || !Number.isFinite(y) || !Number.isFinite(z)) {
       bad++;
       if (firstBad < 0) firstBad = Math.floor(n / 3);
@@ -124,7 +151,18 @@ function parseAscii(b: Uint8Array, maxTriangles: number, target?: Float32Array):
     sy += y;
     sz += z;
   }
-  if (bad > 0) return { ok: false, problems: [{ code: 'non_finite', message: `${bad} vertices are not finite numbers (first in triangle ${firstBad})`, count: bad, firstTriangle: firstBad }] };
+  if (bad > 0)
+    return {
+      ok: false,
+      problems: [
+        {
+          code: 'non_finite',
+          message: `${bad} vertices are not finite numbers (first in triangle ${firstBad})`,
+          count: bad,
+          firstTriangle: firstBad,
+        },
+      ],
+    };
   const inv = 1 / (3 * count);
   return { ok: true, mesh: { corners, triangleCount: count, format: 'ascii', mean: [sx * inv, sy * inv, sz * inv], name }, problems: [] };
 }

@@ -24,17 +24,27 @@ export function validateIndexedMesh(vertices: ArrayLike<number>, triangles: Uint
     problems.push({ code: 'no_triangles', message: 'the mesh has no triangles' });
     return { problems, ok: false, signedVolume: 0 };
   }
-  let lo0 = Infinity, lo1 = Infinity, lo2 = Infinity, hi0 = -Infinity, hi1 = -Infinity, hi2 = -Infinity;
+  let lo0 = Infinity,
+    lo1 = Infinity,
+    lo2 = Infinity,
+    hi0 = -Infinity,
+    hi1 = -Infinity,
+    hi2 = -Infinity;
   let nonFinite = 0;
   for (let i = 0; i < vertices.length; i += 3) {
-    const x = vertices[i], y = vertices[i + 1], z = vertices[i + 2];
+    const x = vertices[i],
+      y = vertices[i + 1],
+      z = vertices[i + 2];
     if (!Number.isFinite(x) || !Number.isFinite(y) || !Number.isFinite(z)) {
       nonFinite++;
       continue;
     }
-    if (x < lo0) lo0 = x; if (x > hi0) hi0 = x;
-    if (y < lo1) lo1 = y; if (y > hi1) hi1 = y;
-    if (z < lo2) lo2 = z; if (z > hi2) hi2 = z;
+    if (x < lo0) lo0 = x;
+    if (x > hi0) hi0 = x;
+    if (y < lo1) lo1 = y;
+    if (y > hi1) hi1 = y;
+    if (z < lo2) lo2 = z;
+    if (z > hi2) hi2 = z;
   }
   if (nonFinite > 0) {
     problems.push({ code: 'non_finite', message: `${nonFinite} vertices have NaN or infinite coordinates`, count: nonFinite });
@@ -42,14 +52,25 @@ export function validateIndexedMesh(vertices: ArrayLike<number>, triangles: Uint
   }
   const diag2 = (hi0 - lo0) ** 2 + (hi1 - lo1) ** 2 + (hi2 - lo2) ** 2;
   const areaFloor = 1e-12 * diag2;
-  let degenerate = 0, firstDegenerate = -1;
+  let degenerate = 0,
+    firstDegenerate = -1;
   let v6 = 0;
   for (let t = 0; t < nt; t++) {
-    const a = triangles[3 * t], b = triangles[3 * t + 1], c = triangles[3 * t + 2];
-    const ax = vertices[3 * a], ay = vertices[3 * a + 1], az = vertices[3 * a + 2];
-    const e1x = vertices[3 * b] - ax, e1y = vertices[3 * b + 1] - ay, e1z = vertices[3 * b + 2] - az;
-    const e2x = vertices[3 * c] - ax, e2y = vertices[3 * c + 1] - ay, e2z = vertices[3 * c + 2] - az;
-    const nx = e1y * e2z - e1z * e2y, ny = e1z * e2x - e1x * e2z, nz = e1x * e2y - e1y * e2x;
+    const a = triangles[3 * t],
+      b = triangles[3 * t + 1],
+      c = triangles[3 * t + 2];
+    const ax = vertices[3 * a],
+      ay = vertices[3 * a + 1],
+      az = vertices[3 * a + 2];
+    const e1x = vertices[3 * b] - ax,
+      e1y = vertices[3 * b + 1] - ay,
+      e1z = vertices[3 * b + 2] - az;
+    const e2x = vertices[3 * c] - ax,
+      e2y = vertices[3 * c + 1] - ay,
+      e2z = vertices[3 * c + 2] - az;
+    const nx = e1y * e2z - e1z * e2y,
+      ny = e1z * e2x - e1x * e2z,
+      nz = e1x * e2y - e1y * e2x;
     const area2 = Math.hypot(nx, ny, nz);
     if (a === b || b === c || a === c || area2 <= areaFloor) {
       degenerate++;
@@ -59,7 +80,12 @@ export function validateIndexedMesh(vertices: ArrayLike<number>, triangles: Uint
     v6 += (ax - lo0) * nx + (ay - lo1) * ny + (az - lo2) * nz;
   }
   if (degenerate > 0) {
-    problems.push({ code: 'degenerate', message: `${degenerate} triangles have no area (repeated or collinear corners)`, count: degenerate, firstTriangle: firstDegenerate });
+    problems.push({
+      code: 'degenerate',
+      message: `${degenerate} triangles have no area (repeated or collinear corners)`,
+      count: degenerate,
+      firstTriangle: firstDegenerate,
+    });
   }
   checkEdges(triangles, nt, problems);
   const blocking = problems.length > 0;
@@ -101,10 +127,12 @@ function checkEdges(triangles: Uint32Array, nt: number, problems: MeshProblem[])
       s = (s + 1) & mask;
     }
   };
-  let sameDirection = 0, firstSame = -1;
+  let sameDirection = 0,
+    firstSame = -1;
   for (let t = 0; t < nt; t++) {
     for (let e = 0; e < 3; e++) {
-      const a = triangles[3 * t + e], b = triangles[3 * t + ((e + 1) % 3)];
+      const a = triangles[3 * t + e],
+        b = triangles[3 * t + ((e + 1) % 3)];
       if (a === b) continue;
       const s = slot(a, b, true);
       uses[s]++;
@@ -114,7 +142,8 @@ function checkEdges(triangles: Uint32Array, nt: number, problems: MeshProblem[])
       }
     }
   }
-  let open = 0, nonManifold = 0;
+  let open = 0,
+    nonManifold = 0;
   for (let s = 0; s < size; s++) {
     if (from[s] < 0) continue;
     const r = slot(to[s], from[s], false);
@@ -124,8 +153,18 @@ function checkEdges(triangles: Uint32Array, nt: number, problems: MeshProblem[])
     else if (total > 2) nonManifold++;
   }
   if (open > 0) problems.push({ code: 'open', message: `the mesh is not closed: ${open} edges belong to one triangle only`, count: open });
-  if (nonManifold > 0) problems.push({ code: 'non_manifold', message: `${nonManifold} directed edges are shared by more than two triangles`, count: nonManifold });
+  if (nonManifold > 0)
+    problems.push({
+      code: 'non_manifold',
+      message: `${nonManifold} directed edges are shared by more than two triangles`,
+      count: nonManifold,
+    });
   if (sameDirection > 0 && nonManifold === 0) {
-    problems.push({ code: 'inconsistent_orientation', message: `${sameDirection} edges run the same way in both their triangles (mixed orientation)`, count: sameDirection, firstTriangle: firstSame });
+    problems.push({
+      code: 'inconsistent_orientation',
+      message: `${sameDirection} edges run the same way in both their triangles (mixed orientation)`,
+      count: sameDirection,
+      firstTriangle: firstSame,
+    });
   }
 }

@@ -17,7 +17,9 @@ export function weldVertices(corners: Float32Array | Float64Array, count: number
   const bits = new Uint32Array(f.buffer);
   let nv = 0;
   for (let i = 0; i < nCorners; i++) {
-    const x = corners[3 * i], y = corners[3 * i + 1], z = corners[3 * i + 2];
+    const x = corners[3 * i],
+      y = corners[3 * i + 1],
+      z = corners[3 * i + 2];
     // Normalise −0 to +0 so the two zeros weld.
     f[0] = x + 0;
     let h = Math.imul(bits[0] ^ bits[1], 0x9e3779b1);

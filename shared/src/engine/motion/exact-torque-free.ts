@@ -57,8 +57,12 @@ export function exactTorqueFree(moments: ArrayLike<number>, omega0: ArrayLike<nu
   const c = dMid > 0 ? hi : lo;
   const a = dMid > 0 ? lo : hi;
   const b = mid;
-  const Ia = moments[a], Ib = moments[b], Ic = moments[c];
-  const Da = gap(a), Dc = gap(c), Db = dMid;
+  const Ia = moments[a],
+    Ib = moments[b],
+    Ic = moments[c];
+  const Da = gap(a),
+    Dc = gap(c),
+    Db = dMid;
   const A = Math.sqrt(-Dc / (Ia * (Ic - Ia)));
   const B = Math.sqrt(-Dc / (Ib * (Ic - Ib)));
   const C = Math.sqrt(Da / (Ic * (Ic - Ia)));

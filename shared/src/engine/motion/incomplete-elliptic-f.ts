@@ -9,17 +9,24 @@ import { completeEllipticK } from './complete-elliptic-k';
 export function carlsonRF(x: number, y: number, z: number): number {
   let a = (x + y + z) / 3;
   for (let i = 0; i < 40; i++) {
-    const dx = 1 - x / a, dy = 1 - y / a, dz = 1 - z / a;
+    const dx = 1 - x / a,
+      dy = 1 - y / a,
+      dz = 1 - z / a;
     if (Math.max(Math.abs(dx), Math.abs(dy), Math.abs(dz)) < 1.5e-3) break;
-    const sx = Math.sqrt(x), sy = Math.sqrt(y), sz = Math.sqrt(z);
+    const sx = Math.sqrt(x),
+      sy = Math.sqrt(y),
+      sz = Math.sqrt(z);
     const lambda = sx * sy + sy * sz + sz * sx;
     x = 0.25 * (x + lambda);
     y = 0.25 * (y + lambda);
     z = 0.25 * (z + lambda);
     a = 0.25 * (a + lambda);
   }
-  const X = 1 - x / a, Y = 1 - y / a, Z = -(X + Y);
-  const e2 = X * Y - Z * Z, e3 = X * Y * Z;
+  const X = 1 - x / a,
+    Y = 1 - y / a,
+    Z = -(X + Y);
+  const e2 = X * Y - Z * Z,
+    e3 = X * Y * Z;
   return (1 - e2 / 10 + e3 / 14 + (e2 * e2) / 24 - (3 * e2 * e3) / 44) / Math.sqrt(a);
 }
 
@@ -32,7 +39,8 @@ export function carlsonRF(x: number, y: number, z: number): number {
 export function incompleteEllipticF(phi: number, m: number, mc = 1 - m): number {
   if (phi > Math.PI / 2) return 2 * completeEllipticK(m, mc) - incompleteEllipticF(Math.PI - phi, m, mc);
   if (phi < -Math.PI / 2) return -incompleteEllipticF(-phi, m, mc);
-  const s = Math.sin(phi), c = Math.cos(phi);
+  const s = Math.sin(phi),
+    c = Math.cos(phi);
   if (s === 0) return 0;
   return s * carlsonRF(c * c, c * c + mc * s * s, 1);
 }

@@ -29,7 +29,9 @@ export function jacobiSnCnDn(out: Float64Array, u: number, m: number, mc = 1 - m
   }
   const k4 = 4 * completeEllipticK(m, mc);
   if (Math.abs(u) > k4) u -= k4 * Math.round(u / k4);
-  let a = 1, b = Math.sqrt(mc), c = Math.sqrt(m);
+  let a = 1,
+    b = Math.sqrt(mc),
+    c = Math.sqrt(m);
   let n = 0;
   as[0] = a;
   cs[0] = c;
@@ -44,7 +46,8 @@ export function jacobiSnCnDn(out: Float64Array, u: number, m: number, mc = 1 - m
   }
   let phi = Math.pow(2, n) * a * u;
   for (let j = n; j >= 1; j--) phi = 0.5 * (phi + Math.asin((cs[j] / as[j]) * Math.sin(phi)));
-  const sn = Math.sin(phi), cn = Math.cos(phi);
+  const sn = Math.sin(phi),
+    cn = Math.cos(phi);
   out[0] = sn;
   out[1] = cn;
   out[2] = Math.sqrt(cn * cn + mc * sn * sn);

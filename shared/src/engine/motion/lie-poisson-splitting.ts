@@ -19,9 +19,12 @@ function subFlow(s: RigidState, I: ArrayLike<number>, axis: 0 | 1 | 2, h: number
   const L = s.L;
   const w = L[axis] / I[axis];
   const ang = w * h;
-  const c = Math.cos(ang), sn = Math.sin(ang);
-  const j = (axis + 1) % 3, k = (axis + 2) % 3;
-  const lj = L[j], lk = L[k];
+  const c = Math.cos(ang),
+    sn = Math.sin(ang);
+  const j = (axis + 1) % 3,
+    k = (axis + 2) % 3;
+  const lj = L[j],
+    lk = L[k];
   // d/dt (L_j, L_k) = ω_i (L_k, −L_j) for the cyclic order (i, j, k).
   L[j] = lj * c + lk * sn;
   L[k] = lk * c - lj * sn;

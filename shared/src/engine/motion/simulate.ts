@@ -17,7 +17,9 @@ const finite = z.number({ error: 'must be a number' });
 /** Input of simulate(): either principal `moments` or a `part` document. */
 export const simulateInputSchema = z
   .object({
-    moments: z.tuple([finite.positive(), finite.positive(), finite.positive()], { error: 'must be three positive principal moments (kg·m²)' }).optional(),
+    moments: z
+      .tuple([finite.positive(), finite.positive(), finite.positive()], { error: 'must be three positive principal moments (kg·m²)' })
+      .optional(),
     part: z.unknown().optional(),
     /** With `moments`: a role or a direction in the principal frame; with `part`: a direction in part axes. Default: the part's spin axis, or the intermediate axis. */
     axis: z.union([roleSchema, z.tuple([finite, finite, finite])]).optional(),
@@ -28,10 +30,17 @@ export const simulateInputSchema = z
     sampleRate: finite.positive({ error: 'must be greater than zero' }).max(2000, { error: 'must be at most 2000 samples/s' }),
   })
   .superRefine((v, ctx) => {
-    if ((v.moments === undefined) === (v.part === undefined)) ctx.addIssue({ code: 'custom', path: ['moments'], message: 'give either moments or part' });
+    if ((v.moments === undefined) === (v.part === undefined))
+      ctx.addIssue({ code: 'custom', path: ['moments'], message: 'give either moments or part' });
     if (v.moments && v.rate === undefined) ctx.addIssue({ code: 'custom', path: ['rate'], message: 'is required with moments' });
-    if (Math.floor(v.seconds * v.sampleRate) + 1 > MAX_SIMULATION_SAMPLES) ctx.addIssue({ code: 'custom', path: ['sampleRate'], message: `seconds × sampleRate must stay below ${MAX_SIMULATION_SAMPLES} samples` });
-    if (Array.isArray(v.axis) && !(Math.hypot(...v.axis) > 0)) ctx.addIssue({ code: 'custom', path: ['axis'], message: 'must not be the zero vector' });
+    if (Math.floor(v.seconds * v.sampleRate) + 1 > MAX_SIMULATION_SAMPLES)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['sampleRate'],
+        message: `seconds × sampleRate must stay below ${MAX_SIMULATION_SAMPLES} samples`,
+      });
+    if (Array.isArray(v.axis) && !(Math.hypot(...v.axis) > 0))
+      ctx.addIssue({ code: 'custom', path: ['axis'], message: 'must not be the zero vector' });
   });
 export type SimulateInput = z.input<typeof simulateInputSchema>;
 
@@ -72,7 +81,11 @@ const DEG = Math.PI / 180;
  */
 export function simulate(input: unknown, resolvers: PartResolvers = {}): SimulationResult {
   const parsed = simulateInputSchema.safeParse(input);
-  if (!parsed.success) throw new EngineInputError('invalid', parsed.error.issues.map((i) => ({ path: formatPath(i.path), message: i.message })));
+  if (!parsed.success)
+    throw new EngineInputError(
+      'invalid',
+      parsed.error.issues.map((i) => ({ path: formatPath(i.path), message: i.message })),
+    );
   const v = parsed.data;
   let I: number[];
   let P: Float64Array;
@@ -87,18 +100,27 @@ export function simulate(input: unknown, resolvers: PartResolvers = {}): Simulat
     rate = v.rate!;
   } else {
     const doc = validatePartDocument(v.part);
-    if (!doc.ok) throw new EngineInputError('invalid', doc.errors.map((e) => ({ path: e.path ? `part.${e.path}` : 'part', message: e.message })));
+    if (!doc.ok)
+      throw new EngineInputError(
+        'invalid',
+        doc.errors.map((e) => ({ path: e.path ? `part.${e.path}` : 'part', message: e.message })),
+      );
     const mp = partMassProperties(doc.value, resolvers);
     const pa = principalOfPart(doc.value, mp);
     I = Array.from(pa.moments);
     P = pa.axes;
     const a = Array.isArray(v.axis) ? normalise(v.axis) : typeof v.axis === 'string' ? null : doc.value.spin.axis;
-    dirBody = a ? [0, 1, 2].map((r) => P[3 * r] * a[0] + P[3 * r + 1] * a[1] + P[3 * r + 2] * a[2]) : unitRow(['major', 'intermediate', 'minor'].indexOf(v.axis as string));
+    dirBody = a
+      ? [0, 1, 2].map((r) => P[3 * r] * a[0] + P[3 * r + 1] * a[1] + P[3 * r + 2] * a[2])
+      : unitRow(['major', 'intermediate', 'minor'].indexOf(v.axis as string));
     rate = v.rate ?? doc.value.spin.rate;
     misalignmentDeg = v.misalignmentDeg ?? doc.value.spin.misalignmentDeg;
   }
   const w0 = tilted(dirBody, misalignmentDeg * DEG).map((x) => x * rate);
-  const state: RigidState = { L: new Float64Array([I[0] * w0[0], I[1] * w0[1], I[2] * w0[2]]), q: quatFromMat3(new Float64Array(4), transpose(new Float64Array(9), P)) };
+  const state: RigidState = {
+    L: new Float64Array([I[0] * w0[0], I[1] * w0[1], I[2] * w0[2]]),
+    q: quatFromMat3(new Float64Array(4), transpose(new Float64Array(9), P)),
+  };
   const dtSample = 1 / v.sampleRate;
   // The fastest body rate the motion can reach is |L|/I3 (I3 the smallest moment).
   const maxStep = (2 * Math.PI * I[2]) / (Math.hypot(I[0] * w0[0], I[1] * w0[1], I[2] * w0[2]) * 64);
@@ -106,11 +128,18 @@ export function simulate(input: unknown, resolvers: PartResolvers = {}): Simulat
   const h = dtSample / sub;
   const n = Math.floor(v.seconds * v.sampleRate) + 1;
   const qP = quatFromMat3(new Float64Array(4), P);
-  const qOut = new Float64Array(4), R = new Float64Array(9);
+  const qOut = new Float64Array(4),
+    R = new Float64Array(9);
   const result: SimulationResult = {
     moments: [I[0], I[1], I[2]],
     axes: [0, 1, 2].map((r) => [P[3 * r], P[3 * r + 1], P[3 * r + 2]] as [number, number, number]),
-    times: [], omega: [], attitude: [], angularMomentum: [], twiceEnergy: [], momentumMagnitude: [], polhode: [],
+    times: [],
+    omega: [],
+    attitude: [],
+    angularMomentum: [],
+    twiceEnergy: [],
+    momentumMagnitude: [],
+    polhode: [],
     flipTime: null,
     step: h,
   };
@@ -154,6 +183,7 @@ export function tilted(d: readonly number[], angle: number): number[] {
   let t = [1 - d[0] * d[0], -d[0] * d[1], -d[0] * d[2]];
   if (Math.hypot(t[0], t[1], t[2]) < 1e-9) t = [-d[1] * d[0], 1 - d[1] * d[1], -d[1] * d[2]];
   const tl = Math.hypot(t[0], t[1], t[2]);
-  const c = Math.cos(angle), s = Math.sin(angle);
+  const c = Math.cos(angle),
+    s = Math.sin(angle);
   return [0, 1, 2].map((i) => c * d[i] + (s * t[i]) / tl);
 }

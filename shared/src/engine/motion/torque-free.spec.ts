@@ -2,11 +2,15 @@ import fc from 'fast-check';
 import { quat, quatMultiply, quatNormalize, quatRotateAboutBodyAxis, quatToMat3 } from '../linear/quaternion';
 import { expectAbsClose, expectRelClose } from '../testing/expect-close';
 import { exactTorqueFree } from './exact-torque-free';
-import { splittingStep, splittingStep4, type RigidState } from './lie-poisson-splitting';
+import { splittingStep4, type RigidState } from './lie-poisson-splitting';
 import { simulate } from './simulate';
 
 const momentsArb = fc
-  .tuple(fc.double({ min: 0.1, max: 10, noNaN: true }), fc.double({ min: 0.1, max: 10, noNaN: true }), fc.double({ min: 0.1, max: 10, noNaN: true }))
+  .tuple(
+    fc.double({ min: 0.1, max: 10, noNaN: true }),
+    fc.double({ min: 0.1, max: 10, noNaN: true }),
+    fc.double({ min: 0.1, max: 10, noNaN: true }),
+  )
   .filter(([a, b, c]) => Math.min(Math.abs(a - b), Math.abs(b - c), Math.abs(a - c)) > 0.05 * Math.max(a, b, c));
 // A component below 1e-9 rad/s is taken as exactly zero: between that and zero (fast-check found
 // ω0 = (-7e-209, -3e-24, 2) about an intermediate axis) the start sits within double precision of the
@@ -29,7 +33,7 @@ describe('exact torque-free solution (Landau & Lifshitz, Mechanics, §37)', () =
     expectAbsClose(w[2], 1, 1e-15);
   });
 
-  it('property: reproduces the initial ω for any moment order, and satisfies Euler\'s equations I1ω̇1 = (I2 − I3)ω2ω3 (cyclic)', () => {
+  it("property: reproduces the initial ω for any moment order, and satisfies Euler's equations I1ω̇1 = (I2 − I3)ω2ω3 (cyclic)", () => {
     fc.assert(
       fc.property(momentsArb, omegaArb, fc.double({ min: 0, max: 20, noNaN: true }), (I, w0, t) => {
         const e = exactTorqueFree(I, w0);
@@ -38,9 +42,12 @@ describe('exact torque-free solution (Landau & Lifshitz, Mechanics, §37)', () =
         const scale = Math.hypot(...w0);
         for (let i = 0; i < 3; i++) expectAbsClose(at0[i], w0[i], 1e-8 * scale); // looser only on the separatrix's edge (mc ~ 1e-100)
         const h = 1e-5;
-        const a = e.omegaAt(t - h), b = e.omegaAt(t + h), w = e.omegaAt(t);
+        const a = e.omegaAt(t - h),
+          b = e.omegaAt(t + h),
+          w = e.omegaAt(t);
         for (let i = 0; i < 3; i++) {
-          const j = (i + 1) % 3, k = (i + 2) % 3;
+          const j = (i + 1) % 3,
+            k = (i + 2) % 3;
           const lhs = (I[i] * (b[i] - a[i])) / (2 * h);
           expectAbsClose(lhs, (I[j] - I[k]) * w[j] * w[k], 1e-6 * Math.max(...I) * scale * scale);
         }
@@ -72,10 +79,16 @@ describe('explicit Lie–Poisson splitting (McLachlan 1993; Touma & Wisdom 1994)
       splittingStep4(c, I, tau);
       return c.L[1];
     };
-    let a = 0, b = 2 * h, fa = trial(a), fb = trial(b);
+    let a = 0,
+      b = 2 * h,
+      fa = trial(a),
+      fb = trial(b);
     for (let k = 0; k < 30 && Math.abs(b - a) > 1e-15; k++) {
       const c = b - (fb * (b - a)) / (fb - fa);
-      a = b; fa = fb; b = c; fb = trial(c);
+      a = b;
+      fa = fb;
+      b = c;
+      fb = trial(c);
     }
     expectRelClose(t + b, tFlip, 1e-6);
   });
@@ -96,19 +109,25 @@ describe('explicit Lie–Poisson splitting (McLachlan 1993; Touma & Wisdom 1994)
     expectRelClose(Math.hypot(...s.L), L0, 1e-12, '|L|');
     expect(worstT).toBeLessThan(1e-6);
     quatToMat3(R, s.q);
-    for (let r = 0; r < 3; r++) expectAbsClose(R[3 * r] * s.L[0] + R[3 * r + 1] * s.L[1] + R[3 * r + 2] * s.L[2], spatial0[r], 1e-10 * L0, 'spatial L');
+    for (let r = 0; r < 3; r++)
+      expectAbsClose(R[3 * r] * s.L[0] + R[3 * r + 1] * s.L[1] + R[3 * r + 2] * s.L[2], spatial0[r], 1e-10 * L0, 'spatial L');
   });
 
   it('property: |L|² and 2T are conserved along random runs (fourth-order composition)', () => {
     fc.assert(
       fc.property(momentsArb, omegaArb, (I, w) => {
         const s = stateOf(I, w);
-        const G = Math.hypot(...s.L), T = s.L.reduce((acc, l, i) => acc + (l * l) / I[i], 0);
+        const G = Math.hypot(...s.L),
+          T = s.L.reduce((acc, l, i) => acc + (l * l) / I[i], 0);
         // Step against the fastest body rate the motion can reach, |L|/I_min.
         const h = (2 * Math.PI * Math.min(...I)) / G / 200;
         for (let k = 0; k < 2000; k++) splittingStep4(s, I, h);
         expectRelClose(Math.hypot(...s.L), G, 1e-12);
-        expectRelClose(s.L.reduce((acc, l, i) => acc + (l * l) / I[i], 0), T, 1e-6);
+        expectRelClose(
+          s.L.reduce((acc, l, i) => acc + (l * l) / I[i], 0),
+          T,
+          1e-6,
+        );
       }),
       { numRuns: 50 },
     );

@@ -119,17 +119,28 @@ export function partMassProperties(doc: PartDocument, resolvers: PartResolvers =
     pieces.push({ index, primitive: p, density, sign, solid, rotation, body, dimensions: values, present, meshVertices, tolerance });
   });
   if (issues.length > 0) throw new EngineInputError('unanalysable', issues);
-  const body = composeBodies(createBody(), pieces.map((x) => x.body));
+  const body = composeBodies(
+    createBody(),
+    pieces.map((x) => x.body),
+  );
   if (!(body.mass > 0)) {
     const removals = pieces.filter((x) => x.sign < 0).sort((a, b) => a.body.mass - b.body.mass);
     const path = removals.length > 0 ? `primitives[${removals[0].index}]` : 'primitives';
-    throw new EngineInputError('unanalysable', [{ path, message: `removals leave no mass (total ${body.mass.toPrecision(4)} kg): a removal is larger than what it cuts` }]);
+    throw new EngineInputError('unanalysable', [
+      { path, message: `removals leave no mass (total ${body.mass.toPrecision(4)} kg): a removal is larger than what it cuts` },
+    ]);
   }
   return { body, pieces, hasMesh };
 }
 
 /** Integrates a mesh primitive into `solid`; returns its scaled local vertices, or null after recording issues. */
-function meshSolid(p: Extract<Primitive, { shape: 'mesh' }>, at: string, solid: Solid, issues: InputIssue[], resolvers: PartResolvers): Float64Array | null {
+function meshSolid(
+  p: Extract<Primitive, { shape: 'mesh' }>,
+  at: string,
+  solid: Solid,
+  issues: InputIssue[],
+  resolvers: PartResolvers,
+): Float64Array | null {
   let vertices: Float64Array;
   let triangles: Uint32Array;
   let where: string;

@@ -10,7 +10,8 @@ export function partReach(pieces: readonly PlacedPiece[], u: ArrayLike<number>):
   let best = -Infinity;
   for (const piece of pieces) {
     if (piece.sign < 0) continue;
-    const p = piece.primitive, r = piece.rotation;
+    const p = piece.primitive,
+      r = piece.rotation;
     const base = p.position[0] * u[0] + p.position[1] * u[1] + p.position[2] * u[2];
     // Direction in the local frame: Rᵀu.
     const lx = r[0] * u[0] + r[3] * u[1] + r[6] * u[2];

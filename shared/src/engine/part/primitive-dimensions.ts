@@ -25,16 +25,32 @@ export const DIMENSION_NAMES: Record<PrimitiveShape, readonly string[]> = {
 export function primitiveDimensions(p: Primitive): { values: number[]; present: boolean[] } {
   let v: (number | undefined)[];
   switch (p.shape) {
-    case 'box': v = [p.size[0], p.size[1], p.size[2], p.wall]; break;
-    case 'cylinder': v = [p.radius, p.length, p.innerRadius]; break;
-    case 'cone': v = [p.radius, p.length, p.topRadius]; break;
-    case 'sphere': v = [p.radius, p.innerRadius]; break;
-    case 'ellipsoid': v = [p.semiAxes[0], p.semiAxes[1], p.semiAxes[2]]; break;
-    case 'torus': v = [p.majorRadius, p.minorRadius]; break;
-    case 'capsule': v = [p.radius, p.length]; break;
-    default: v = [];
+    case 'box':
+      v = [p.size[0], p.size[1], p.size[2], p.wall];
+      break;
+    case 'cylinder':
+      v = [p.radius, p.length, p.innerRadius];
+      break;
+    case 'cone':
+      v = [p.radius, p.length, p.topRadius];
+      break;
+    case 'sphere':
+      v = [p.radius, p.innerRadius];
+      break;
+    case 'ellipsoid':
+      v = [p.semiAxes[0], p.semiAxes[1], p.semiAxes[2]];
+      break;
+    case 'torus':
+      v = [p.majorRadius, p.minorRadius];
+      break;
+    case 'capsule':
+      v = [p.radius, p.length];
+      break;
+    default:
+      v = [];
   }
-  const values: number[] = [], present: boolean[] = [];
+  const values: number[] = [],
+    present: boolean[] = [];
   for (let i = 0; i < v.length; i++) {
     values.push(v[i] ?? 0);
     present.push(v[i] !== undefined);
@@ -45,14 +61,22 @@ export function primitiveDimensions(p: Primitive): { values: number[]; present: 
 /** Whether perturbed dimensions still describe a valid solid (the schema's rules). */
 export function dimensionsValid(shape: PrimitiveShape, d: ArrayLike<number>): boolean {
   switch (shape) {
-    case 'box': return d[0] > 0 && d[1] > 0 && d[2] > 0 && d[3] >= 0 && 2 * d[3] < Math.min(d[0], d[1], d[2]);
-    case 'cylinder': return d[0] > 0 && d[1] > 0 && d[2] >= 0 && d[2] < d[0];
-    case 'cone': return d[0] > 0 && d[1] > 0 && d[2] >= 0;
-    case 'sphere': return d[0] > 0 && d[1] >= 0 && d[1] < d[0];
-    case 'ellipsoid': return d[0] > 0 && d[1] > 0 && d[2] > 0;
-    case 'torus': return d[0] > 0 && d[1] > 0 && d[1] < d[0];
-    case 'capsule': return d[0] > 0 && d[1] >= 0;
-    default: return true;
+    case 'box':
+      return d[0] > 0 && d[1] > 0 && d[2] > 0 && d[3] >= 0 && 2 * d[3] < Math.min(d[0], d[1], d[2]);
+    case 'cylinder':
+      return d[0] > 0 && d[1] > 0 && d[2] >= 0 && d[2] < d[0];
+    case 'cone':
+      return d[0] > 0 && d[1] > 0 && d[2] >= 0;
+    case 'sphere':
+      return d[0] > 0 && d[1] >= 0 && d[1] < d[0];
+    case 'ellipsoid':
+      return d[0] > 0 && d[1] > 0 && d[2] > 0;
+    case 'torus':
+      return d[0] > 0 && d[1] > 0 && d[1] < d[0];
+    case 'capsule':
+      return d[0] > 0 && d[1] >= 0;
+    default:
+      return true;
   }
 }
 
@@ -62,14 +86,23 @@ export function dimensionsValid(shape: PrimitiveShape, d: ArrayLike<number>): bo
  */
 export function solidFromDimensions(out: Solid, shape: PrimitiveShape, d: ArrayLike<number>): Solid {
   switch (shape) {
-    case 'box': return d[3] > 0 ? hollowBoxSolid(out, d[0], d[1], d[2], d[3]) : boxSolid(out, d[0], d[1], d[2]);
-    case 'cylinder': return d[2] > 0 ? tubeSolid(out, d[0], d[2], d[1]) : cylinderSolid(out, d[0], d[1]);
-    case 'cone': return frustumSolid(out, d[0], d[2], d[1]);
-    case 'sphere': return d[1] > 0 ? sphericalShellSolid(out, d[0], d[1]) : sphereSolid(out, d[0]);
-    case 'ellipsoid': return ellipsoidSolid(out, d[0], d[1], d[2]);
-    case 'torus': return torusSolid(out, d[0], d[1]);
-    case 'capsule': return capsuleSolid(out, d[0], d[1]);
-    case 'point': return setAxialSolid(out, 0, 0, 0, 0, 0);
-    default: throw new Error(`solidFromDimensions: ${shape} has no closed form`);
+    case 'box':
+      return d[3] > 0 ? hollowBoxSolid(out, d[0], d[1], d[2], d[3]) : boxSolid(out, d[0], d[1], d[2]);
+    case 'cylinder':
+      return d[2] > 0 ? tubeSolid(out, d[0], d[2], d[1]) : cylinderSolid(out, d[0], d[1]);
+    case 'cone':
+      return frustumSolid(out, d[0], d[2], d[1]);
+    case 'sphere':
+      return d[1] > 0 ? sphericalShellSolid(out, d[0], d[1]) : sphereSolid(out, d[0]);
+    case 'ellipsoid':
+      return ellipsoidSolid(out, d[0], d[1], d[2]);
+    case 'torus':
+      return torusSolid(out, d[0], d[1]);
+    case 'capsule':
+      return capsuleSolid(out, d[0], d[1]);
+    case 'point':
+      return setAxialSolid(out, 0, 0, 0, 0, 0);
+    default:
+      throw new Error(`solidFromDimensions: ${shape} has no closed form`);
   }
 }

@@ -9,13 +9,21 @@ import type { PrimitiveShape } from '../../schemas/part-document';
 export function primitiveSupport(shape: PrimitiveShape, d: ArrayLike<number>, ux: number, uy: number, uz: number): number {
   const radial = Math.hypot(ux, uy);
   switch (shape) {
-    case 'box': return 0.5 * (d[0] * Math.abs(ux) + d[1] * Math.abs(uy) + d[2] * Math.abs(uz));
-    case 'cylinder': return d[0] * radial + 0.5 * d[1] * Math.abs(uz);
-    case 'cone': return Math.max(d[0] * radial, d[2] * radial + d[1] * uz);
-    case 'sphere': return d[0];
-    case 'ellipsoid': return Math.hypot(d[0] * ux, d[1] * uy, d[2] * uz);
-    case 'torus': return d[0] * radial + d[1];
-    case 'capsule': return d[0] + 0.5 * d[1] * Math.abs(uz);
-    default: return 0;
+    case 'box':
+      return 0.5 * (d[0] * Math.abs(ux) + d[1] * Math.abs(uy) + d[2] * Math.abs(uz));
+    case 'cylinder':
+      return d[0] * radial + 0.5 * d[1] * Math.abs(uz);
+    case 'cone':
+      return Math.max(d[0] * radial, d[2] * radial + d[1] * uz);
+    case 'sphere':
+      return d[0];
+    case 'ellipsoid':
+      return Math.hypot(d[0] * ux, d[1] * uy, d[2] * uz);
+    case 'torus':
+      return d[0] * radial + d[1];
+    case 'capsule':
+      return d[0] + 0.5 * d[1] * Math.abs(uz);
+    default:
+      return 0;
   }
 }

@@ -65,10 +65,28 @@ describe('validatePartDocument (PRODUCT.md list of bad documents)', () => {
       { id: 'b', shape: 'box', size: [0.1, 0.1, 0.02], wall: 0.01, density: 1 },
       { id: 't', shape: 'torus', majorRadius: 0.01, minorRadius: 0.02, density: 1 },
       { id: 'p', shape: 'point', density: 3 },
-      { id: 'm', shape: 'mesh', vertices: [[0, 0, 0], [1, 0, 0], [0, 1, 0]], triangles: [[0, 1, 3]], density: 1 },
+      {
+        id: 'm',
+        shape: 'mesh',
+        vertices: [
+          [0, 0, 0],
+          [1, 0, 0],
+          [0, 1, 0],
+        ],
+        triangles: [[0, 1, 3]],
+        density: 1,
+      },
     ];
     const paths = errorsOf(d).map((e) => e.path);
-    expect(paths).toEqual(expect.arrayContaining(['primitives[0].wall', 'primitives[1].minorRadius', 'primitives[2].mass', 'primitives[2].density', 'primitives[3].triangles[0][2]']));
+    expect(paths).toEqual(
+      expect.arrayContaining([
+        'primitives[0].wall',
+        'primitives[1].minorRadius',
+        'primitives[2].mass',
+        'primitives[2].density',
+        'primitives[3].triangles[0][2]',
+      ]),
+    );
   });
 
   it('grip: the face normal must be perpendicular to the long axis', () => {
@@ -77,6 +95,7 @@ describe('validatePartDocument (PRODUCT.md list of bad documents)', () => {
   });
 
   it('never throws, whatever it is given', () => {
-    for (const x of [null, undefined, 42, 'text', [], { primitives: 'x' }, { primitives: [null] }]) expect(validatePartDocument(x).ok).toBe(false);
+    for (const x of [null, undefined, 42, 'text', [], { primitives: 'x' }, { primitives: [null] }])
+      expect(validatePartDocument(x).ok).toBe(false);
   });
 });

@@ -13,7 +13,10 @@ const GL_W = [0.3478548451374538, 0.6521451548625461, 0.6521451548625461, 0.3478
  * gives them exactly. Precondition: R > 0, r ≥ 0, h > 0 (m).
  */
 export function frustumSolid(out: Solid, baseRadius: number, topRadius: number, h: number): Solid {
-  let v = 0, mz = 0, szz = 0, q = 0;
+  let v = 0,
+    mz = 0,
+    szz = 0,
+    q = 0;
   const half = h / 2;
   for (let i = 0; i < 4; i++) {
     const z = half * (GL_X[i] + 1);

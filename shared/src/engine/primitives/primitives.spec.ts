@@ -16,7 +16,7 @@ const diag = (s: Solid) => [s.inertia[0], s.inertia[4], s.inertia[8]];
 const EPS = 1e-13;
 
 describe('primitive closed forms (unit density, so mass = volume)', () => {
-  it('box a×b×c: Ixx = m(b²+c²)/12 — Machinery\'s Handbook 31st ed., rectangular prism', () => {
+  it("box a×b×c: Ixx = m(b²+c²)/12 — Machinery's Handbook 31st ed., rectangular prism", () => {
     const [a, b, c] = [0.3, 0.05, 0.02];
     const s = boxSolid(createSolid(), a, b, c);
     const m = a * b * c;
@@ -35,7 +35,7 @@ describe('primitive closed forms (unit density, so mass = volume)', () => {
     expectArrayClose(hollow.inertia, sum.inertia, 1e-14, sum.inertia[0]);
   });
 
-  it('solid cylinder: Izz = m r²/2, Ixx = m(3r² + h²)/12 — Machinery\'s Handbook, solid cylinder', () => {
+  it("solid cylinder: Izz = m r²/2, Ixx = m(3r² + h²)/12 — Machinery's Handbook, solid cylinder", () => {
     const [r, h] = [0.0135, 0.19];
     const s = cylinderSolid(createSolid(), r, h);
     const m = Math.PI * r * r * h;
@@ -45,7 +45,7 @@ describe('primitive closed forms (unit density, so mass = volume)', () => {
     expectRelClose(s.inertia[4], s.inertia[0], EPS);
   });
 
-  it('tube r1 < r2: Izz = m(r1² + r2²)/2, Ixx = m(3(r1² + r2²) + h²)/12 — Machinery\'s Handbook, hollow cylinder', () => {
+  it("tube r1 < r2: Izz = m(r1² + r2²)/2, Ixx = m(3(r1² + r2²) + h²)/12 — Machinery's Handbook, hollow cylinder", () => {
     const [r2, r1, h] = [0.0135, 0.008, 0.17];
     const s = tubeSolid(createSolid(), r2, r1, h);
     const m = Math.PI * (r2 * r2 - r1 * r1) * h;
@@ -62,10 +62,15 @@ describe('primitive closed forms (unit density, so mass = volume)', () => {
     const sh = sphericalShellSolid(createSolid(), r2, r1);
     const ms = (4 / 3) * Math.PI * (r2 ** 3 - r1 ** 3);
     expectRelClose(sh.volume, ms, 1e-12);
-    expectArrayClose(diag(sh), [1, 1, 1].map(() => 0.4 * ms * (r2 ** 5 - r1 ** 5) / (r2 ** 3 - r1 ** 3)), 1e-12, sh.inertia[0]);
+    expectArrayClose(
+      diag(sh),
+      [1, 1, 1].map(() => (0.4 * ms * (r2 ** 5 - r1 ** 5)) / (r2 ** 3 - r1 ** 3)),
+      1e-12,
+      sh.inertia[0],
+    );
   });
 
-  it('ellipsoid: V = 4/3 πabc, Ixx = m(b² + c²)/5 — Machinery\'s Handbook, ellipsoid', () => {
+  it("ellipsoid: V = 4/3 πabc, Ixx = m(b² + c²)/5 — Machinery's Handbook, ellipsoid", () => {
     const [a, b, c] = [0.1, 0.06, 0.03];
     const s = ellipsoidSolid(createSolid(), a, b, c);
     const m = (4 / 3) * Math.PI * a * b * c;
@@ -73,13 +78,13 @@ describe('primitive closed forms (unit density, so mass = volume)', () => {
     expectArrayClose(diag(s), [(m * (b * b + c * c)) / 5, (m * (a * a + c * c)) / 5, (m * (a * a + b * b)) / 5], 1e-14, s.inertia[2 * 4]);
   });
 
-  it('torus: V = 2π²Ra², Izz = m(R² + 3a²/4), Ixx = m(R²/2 + 5a²/8) — Machinery\'s Handbook, torus', () => {
+  it("torus: V = 2π²Ra², Izz = m(R² + 3a²/4), Ixx = m(R²/2 + 5a²/8) — Machinery's Handbook, torus", () => {
     const [R, a] = [0.11, 0.008];
     const s = torusSolid(createSolid(), R, a);
     const m = 2 * Math.PI * Math.PI * R * a * a;
     expectRelClose(s.volume, m, EPS);
     expectRelClose(s.inertia[8], m * (R * R + (3 * a * a) / 4), EPS);
-    expectRelClose(s.inertia[0], m * (R * R / 2 + (5 * a * a) / 8), EPS);
+    expectRelClose(s.inertia[0], m * ((R * R) / 2 + (5 * a * a) / 8), EPS);
   });
 
   it('cone (topRadius 0): centroid h/4 above the base, Izz = 3/10 m r², Ixx = m(3r²/20 + 3h²/80) — standard table (apex form) shifted by the parallel-axis theorem', () => {
@@ -108,10 +113,15 @@ describe('primitive closed forms (unit density, so mass = volume)', () => {
 
   it('hemisphere constants of the capsule (centroid 3r/8, transverse 83/320 m r²) agree with a direct quadrature of disc slices', () => {
     // Composite Simpson rule over z ∈ [0, r] of discs ρ² = r² − z²; independent of the closed form.
-    const r = 1, n = 2000;
-    let V = 0, Mz = 0, Szz = 0, Q = 0;
+    const r = 1,
+      n = 2000;
+    let V = 0,
+      Mz = 0,
+      Szz = 0,
+      Q = 0;
     for (let i = 0; i <= n; i++) {
-      const z = (r * i) / n, w = (i === 0 || i === n ? 1 : i % 2 ? 4 : 2) * (r / n / 3);
+      const z = (r * i) / n,
+        w = (i === 0 || i === n ? 1 : i % 2 ? 4 : 2) * (r / n / 3);
       const a = Math.PI * (r * r - z * z);
       V += w * a;
       Mz += w * a * z;

@@ -38,6 +38,7 @@ export function setAxialSolid(out: Solid, volume: number, zc: number, ixx: numbe
  */
 export function subtractConcentric(out: Solid, outer: Solid, inner: Solid): Solid {
   const v = outer.volume - inner.volume;
-  const jo = outer.inertia, ji = inner.inertia;
+  const jo = outer.inertia,
+    ji = inner.inertia;
   return setAxialSolid(out, v, outer.centroid[2], jo[0] - ji[0], jo[4] - ji[4], jo[8] - ji[8]);
 }

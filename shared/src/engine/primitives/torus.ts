@@ -6,7 +6,8 @@ import { setAxialSolid, type Solid } from './solid';
  * — Machinery's Handbook 31st ed., torus. Precondition: 0 < a < R (m).
  */
 export function torusSolid(out: Solid, majorRadius: number, minorRadius: number): Solid {
-  const R2 = majorRadius * majorRadius, a2 = minorRadius * minorRadius;
+  const R2 = majorRadius * majorRadius,
+    a2 = minorRadius * minorRadius;
   const v = 2 * Math.PI * Math.PI * majorRadius * a2;
   const t = v * (R2 / 2 + (5 * a2) / 8);
   return setAxialSolid(out, v, 0, t, t, v * (R2 + (3 * a2) / 4));

@@ -15,15 +15,24 @@ function tensor(d: [number, number, number], angles: [number, number, number]): 
   return multiply(t, t, transpose(new Float64Array(9), r));
 }
 
-const moments = fc.tuple(fc.double({ min: 1e-6, max: 1, noNaN: true }), fc.double({ min: 1e-6, max: 1, noNaN: true }), fc.double({ min: 1e-6, max: 1, noNaN: true }));
-const angles = fc.tuple(fc.double({ min: -180, max: 180, noNaN: true }), fc.double({ min: -90, max: 90, noNaN: true }), fc.double({ min: -180, max: 180, noNaN: true }));
+const moments = fc.tuple(
+  fc.double({ min: 1e-6, max: 1, noNaN: true }),
+  fc.double({ min: 1e-6, max: 1, noNaN: true }),
+  fc.double({ min: 1e-6, max: 1, noNaN: true }),
+);
+const angles = fc.tuple(
+  fc.double({ min: -180, max: 180, noNaN: true }),
+  fc.double({ min: -90, max: 90, noNaN: true }),
+  fc.double({ min: -180, max: 180, noNaN: true }),
+);
 
 describe('cyclic Jacobi (Golub & Van Loan §8.5)', () => {
   it('satisfies A·V = V·D and VᵀV = I on random symmetric matrices (the invariants ml-matrix tests)', () => {
     fc.assert(
       fc.property(moments, angles, (d, ang) => {
         const A = tensor(d, ang);
-        const vals = new Float64Array(3), V = new Float64Array(9);
+        const vals = new Float64Array(3),
+          V = new Float64Array(9);
         jacobiEigen(A, vals, V);
         const scale = Math.max(...d);
         for (let c = 0; c < 3; c++) {
@@ -44,7 +53,14 @@ describe('cyclic Jacobi (Golub & Van Loan §8.5)', () => {
       fc.property(moments, angles, (d, ang) => {
         const A = tensor(d, ang);
         const p = principalAxes(undefined, A);
-        const ref = new EigenvalueDecomposition(new Matrix([[A[0], A[1], A[2]], [A[3], A[4], A[5]], [A[6], A[7], A[8]]]), { assumeSymmetric: true });
+        const ref = new EigenvalueDecomposition(
+          new Matrix([
+            [A[0], A[1], A[2]],
+            [A[3], A[4], A[5]],
+            [A[6], A[7], A[8]],
+          ]),
+          { assumeSymmetric: true },
+        );
         const rv = [...ref.realEigenvalues].sort((a, b) => b - a);
         for (let i = 0; i < 3; i++) expectAbsClose(p.moments[i], rv[i], 1e-14 * Math.max(...d));
       }),
@@ -58,14 +74,21 @@ describe('cyclic Jacobi (Golub & Van Loan §8.5)', () => {
         // Keep the moments apart so eigenvectors are well defined for the comparison.
         const dd: [number, number, number] = [d[0] + 2, d[1] + 1, d[2]];
         const A = tensor(dd, ang);
-        const rows = [[A[0], A[1], A[2]], [A[3], A[4], A[5]], [A[6], A[7], A[8]]];
+        const rows = [
+          [A[0], A[1], A[2]],
+          [A[3], A[4], A[5]],
+          [A[6], A[7], A[8]],
+        ];
         const trace = A[0] + A[4] + A[8];
-        const ref = eigs(rows, { precision: Number((1e-15 * trace).toPrecision(15)) }) as unknown as { eigenvectors: { value: number; vector: number[] }[] };
+        const ref = eigs(rows, { precision: Number((1e-15 * trace).toPrecision(15)) }) as unknown as {
+          eigenvectors: { value: number; vector: number[] }[];
+        };
         const p = principalAxes(undefined, A);
         const sorted = [...ref.eigenvectors].sort((a, b) => b.value - a.value);
         for (let i = 0; i < 3; i++) {
           expectAbsClose(p.moments[i], sorted[i].value, 1e-14 * trace); // both are accurate to ε·‖A‖, not relative to a tiny moment
-          const v = sorted[i].vector, n = Math.hypot(v[0], v[1], v[2]);
+          const v = sorted[i].vector,
+            n = Math.hypot(v[0], v[1], v[2]);
           const dot = (p.axes[3 * i] * v[0] + p.axes[3 * i + 1] * v[1] + p.axes[3 * i + 2] * v[2]) / n;
           expectAbsClose(Math.abs(dot), 1, 1e-10);
         }
@@ -98,18 +121,27 @@ describe('principalAxes', () => {
   it('inside an equal pair puts the preferred (grip) axis first, projected on the pair plane, deterministically', () => {
     // A rod: unique minor axis along z, equal transverse moments.
     const A = new Float64Array([5, 0, 0, 0, 5, 0, 0, 0, 1]);
-    const p = principalAxes(undefined, A, 1e-9, [[0, 0, 1], [Math.SQRT1_2, Math.SQRT1_2, 0]]);
+    const p = principalAxes(undefined, A, 1e-9, [
+      [0, 0, 1],
+      [Math.SQRT1_2, Math.SQRT1_2, 0],
+    ]);
     expect(p.equalPairs).toEqual([true, false]);
     expectAbsClose(p.axes[0], Math.SQRT1_2, 1e-15);
     expectAbsClose(p.axes[1], Math.SQRT1_2, 1e-15);
     expectAbsClose(Math.abs(p.axes[8]), 1, 1e-15);
     expectAbsClose(determinant(p.axes), 1, 1e-15);
-    const again = principalAxes(undefined, A, 1e-9, [[0, 0, 1], [Math.SQRT1_2, Math.SQRT1_2, 0]]);
+    const again = principalAxes(undefined, A, 1e-9, [
+      [0, 0, 1],
+      [Math.SQRT1_2, Math.SQRT1_2, 0],
+    ]);
     expect(Array.from(again.axes)).toEqual(Array.from(p.axes));
   });
 
   it('three equal moments: the basis comes from the preferences by Gram–Schmidt', () => {
-    const p = principalAxes(undefined, new Float64Array([2, 0, 0, 0, 2, 0, 0, 0, 2]), 1e-9, [[0, 0, 1], [1, 0, 0]]);
+    const p = principalAxes(undefined, new Float64Array([2, 0, 0, 0, 2, 0, 0, 0, 2]), 1e-9, [
+      [0, 0, 1],
+      [1, 0, 0],
+    ]);
     expect(p.equalPairs).toEqual([true, true]);
     expect(Array.from(p.axes)).toEqual([0, 0, 1, 1, 0, 0, 0, 1, 0]);
   });

@@ -49,14 +49,30 @@ export function principalAxes(
 ): PrincipalAxes {
   jacobiEigen(inertia, vals, vecs);
   // Sort three indices by descending eigenvalue (a fixed network, no allocation).
-  let i0 = 0, i1 = 1, i2 = 2, t;
-  if (vals[i1] > vals[i0]) { t = i0; i0 = i1; i1 = t; }
-  if (vals[i2] > vals[i1]) { t = i1; i1 = i2; i2 = t; }
-  if (vals[i1] > vals[i0]) { t = i0; i0 = i1; i1 = t; }
+  let i0 = 0,
+    i1 = 1,
+    i2 = 2,
+    t;
+  if (vals[i1] > vals[i0]) {
+    t = i0;
+    i0 = i1;
+    i1 = t;
+  }
+  if (vals[i2] > vals[i1]) {
+    t = i1;
+    i1 = i2;
+    i2 = t;
+  }
+  if (vals[i1] > vals[i0]) {
+    t = i0;
+    i0 = i1;
+    i1 = t;
+  }
   order[0] = i0;
   order[1] = i1;
   order[2] = i2;
-  const m = out.moments, ax = out.axes;
+  const m = out.moments,
+    ax = out.axes;
   for (let r = 0; r < 3; r++) {
     const k = order[r];
     m[r] = vals[k];
@@ -93,8 +109,12 @@ function signCanonically(ax: Float64Array, r: number): void {
 
 /** row c = row a × row b. */
 function crossRows(ax: Float64Array, a: number, b: number, c: number): void {
-  const ax0 = ax[3 * a], ax1 = ax[3 * a + 1], ax2 = ax[3 * a + 2];
-  const bx0 = ax[3 * b], bx1 = ax[3 * b + 1], bx2 = ax[3 * b + 2];
+  const ax0 = ax[3 * a],
+    ax1 = ax[3 * a + 1],
+    ax2 = ax[3 * a + 2];
+  const bx0 = ax[3 * b],
+    bx1 = ax[3 * b + 1],
+    bx2 = ax[3 * b + 2];
   ax[3 * c] = ax1 * bx2 - ax2 * bx1;
   ax[3 * c + 1] = ax2 * bx0 - ax0 * bx2;
   ax[3 * c + 2] = ax0 * bx1 - ax1 * bx0;
@@ -113,7 +133,9 @@ function fillFromPreferences(ax: Float64Array, first: number, unique: number | n
   for (const p of candidates) {
     const l = Math.hypot(p[0], p[1], p[2]);
     if (!(l > 0)) continue;
-    let x = p[0] / l, y = p[1] / l, z = p[2] / l;
+    let x = p[0] / l,
+      y = p[1] / l,
+      z = p[2] / l;
     if (u) {
       const d = x * u[0] + y * u[1] + z * u[2];
       x -= d * u[0];
@@ -136,7 +158,9 @@ function fillFromPreferences(ax: Float64Array, first: number, unique: number | n
     for (const p of candidates) {
       const l = Math.hypot(p[0], p[1], p[2]);
       if (!(l > 0)) continue;
-      let x = p[0] / l, y = p[1] / l, z = p[2] / l;
+      let x = p[0] / l,
+        y = p[1] / l,
+        z = p[2] / l;
       const d = x * a[0] + y * a[1] + z * a[2];
       x -= d * a[0];
       y -= d * a[1];

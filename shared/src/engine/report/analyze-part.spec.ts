@@ -19,8 +19,22 @@ function thrown(f: () => unknown): EngineInputError {
 describe('analyzePart', () => {
   it('gives every report field of issue item 9, in SI, with no NaN or Infinity', () => {
     const r = analyzePart(racket);
-    expect(Object.keys(r)).toEqual(expect.arrayContaining(['mass', 'volume', 'centerOfMass', 'inertia', 'principal', 'spin', 'trade', 'checks', 'notes']));
-    expect(Object.keys(r.spin).sort()).toEqual(['eFoldingTime', 'explanation', 'flipTime', 'growthRate', 'margins', 'misalignmentDeg', 'nearestAxis', 'verdict', 'wobbleFrequency'].sort());
+    expect(Object.keys(r)).toEqual(
+      expect.arrayContaining(['mass', 'volume', 'centerOfMass', 'inertia', 'principal', 'spin', 'trade', 'checks', 'notes']),
+    );
+    expect(Object.keys(r.spin).sort()).toEqual(
+      [
+        'eFoldingTime',
+        'explanation',
+        'flipTime',
+        'growthRate',
+        'margins',
+        'misalignmentDeg',
+        'nearestAxis',
+        'verdict',
+        'wobbleFrequency',
+      ].sort(),
+    );
     expect(Object.keys(r.trade)).toEqual(expect.arrayContaining(['balancePoint', 'swingweight', 'recoilWeight', 'twistweight']));
     expect(firstNonFinite(JSON.parse(JSON.stringify(r)), '')).toBeNull();
     expect(r.principal.moments[0]).toBeGreaterThanOrEqual(r.principal.moments[1]);
@@ -32,8 +46,11 @@ describe('analyzePart', () => {
     expect(analyzePart(racket).spin.verdict).toBe('flip-prone');
   });
 
-  it('rotationDeg follows R = Rz·Ry·Rx about fixed axes: [90, 0, 90] lays a cylinder\'s axis along x', () => {
-    const r = analyzePart({ primitives: [{ id: 'c', shape: 'cylinder', radius: 0.02, length: 0.3, rotationDeg: [90, 0, 90], density: 1000 }], spin: { axis: [1, 0, 0], rate: 5 } });
+  it("rotationDeg follows R = Rz·Ry·Rx about fixed axes: [90, 0, 90] lays a cylinder's axis along x", () => {
+    const r = analyzePart({
+      primitives: [{ id: 'c', shape: 'cylinder', radius: 0.02, length: 0.3, rotationDeg: [90, 0, 90], density: 1000 }],
+      spin: { axis: [1, 0, 0], rate: 5 },
+    });
     const m = Math.PI * 0.02 ** 2 * 0.3 * 1000;
     expectRelClose(r.inertia[0][0], (m * 0.02 ** 2) / 2, 1e-12); // axial moment (Machinery's Handbook cylinder)
     expectRelClose(r.inertia[1][1], (m * (3 * 0.02 ** 2 + 0.09)) / 12, 1e-12);
@@ -85,7 +102,10 @@ describe('analyzePart', () => {
   });
 
   it('without a grip the trade figures are null and a note says why', () => {
-    const r = analyzePart({ primitives: [{ id: 'b', shape: 'box', size: [0.3, 0.2, 0.1], density: 500 }], spin: { axis: [0, 0, 1], rate: 3 } });
+    const r = analyzePart({
+      primitives: [{ id: 'b', shape: 'box', size: [0.3, 0.2, 0.1], density: 500 }],
+      spin: { axis: [0, 0, 1], rate: 3 },
+    });
     expect(r.trade.swingweight).toBeNull();
     expect(r.notes.join(' ')).toMatch(/No grip frame/);
     // A 3:2:1 box about its shortest edge (z) spins about the major axis (Machinery's Handbook box moments).
@@ -97,7 +117,11 @@ describe('category checks (each indicative, naming its rule)', () => {
   const spin = { axis: [0, 0, 1], rate: 10 };
   it('golf wood head: moment about vertical through the CG and volume against 5900 + 100 g·cm² and 460 + 10 cc (USGA/R&A)', () => {
     // An ellipsoid head 120 × 110 × 60 mm of 150 kg/m³ effective density: V ≈ 415 cc.
-    const r = analyzePart({ category: 'golf-wood', primitives: [{ id: 'h', shape: 'ellipsoid', semiAxes: [0.06, 0.055, 0.03], density: 480 }], spin });
+    const r = analyzePart({
+      category: 'golf-wood',
+      primitives: [{ id: 'h', shape: 'ellipsoid', semiAxes: [0.06, 0.055, 0.03], density: 480 }],
+      spin,
+    });
     const moment = r.checks.find((c) => c.id === 'golf-wood.moment')!;
     const m = r.mass;
     expectRelClose(moment.value!, (m * (0.06 ** 2 + 0.055 ** 2)) / 5, 1e-12);
@@ -110,7 +134,11 @@ describe('category checks (each indicative, naming its rule)', () => {
   });
 
   it('flying disc: diameter, mass and mass per diameter (PDGA); spin about the major axis passes', () => {
-    const r = analyzePart({ category: 'flying-disc', primitives: [{ id: 'd', shape: 'cylinder', radius: 0.105, length: 0.012, mass: 0.17 }], spin });
+    const r = analyzePart({
+      category: 'flying-disc',
+      primitives: [{ id: 'd', shape: 'cylinder', radius: 0.105, length: 0.012, mass: 0.17 }],
+      spin,
+    });
     const get = (id: string) => r.checks.find((c) => c.id === id)!;
     expectAbsClose(get('flying-disc.diameter').value!, 0.21, 1e-12);
     expect(get('flying-disc.mass').status).toBe('pass');
@@ -119,10 +147,13 @@ describe('category checks (each indicative, naming its rule)', () => {
     expect(get('flying-disc.spin-axis').status).toBe('pass');
   });
 
-  it('javelin (World Athletics, men\'s): mass, length and centre of gravity from the tip', () => {
+  it("javelin (World Athletics, men's): mass, length and centre of gravity from the tip", () => {
     const r = analyzePart({
       category: 'javelin',
-      primitives: [{ id: 'shaft', shape: 'cylinder', radius: 0.0125, length: 2.65, position: [0, 0, 1.325], mass: 0.7 }, { id: 'head', shape: 'cone', radius: 0.0125, length: 0.25, position: [0, 0, 2.65], mass: 0.1 }],
+      primitives: [
+        { id: 'shaft', shape: 'cylinder', radius: 0.0125, length: 2.65, position: [0, 0, 1.325], mass: 0.7 },
+        { id: 'head', shape: 'cone', radius: 0.0125, length: 0.25, position: [0, 0, 2.65], mass: 0.1 },
+      ],
       spin,
       grip: { point: [0, 0, 0], axis: [0, 0, 1], faceNormal: [0, 1, 0] },
     });
@@ -143,7 +174,22 @@ describe('category checks (each indicative, naming its rule)', () => {
   });
 
   it('bat: moment about the 6-inch pivot and centre of percussion (ASTM F2398); without a grip they are not evaluated', () => {
-    const doc = { category: 'bat', primitives: [{ id: 'barrel', shape: 'cone', radius: 0.033, topRadius: 0.015, length: 0.84, rotationDeg: [180, 0, 0], position: [0, 0, 0.84], density: 650 }], spin };
+    const doc = {
+      category: 'bat',
+      primitives: [
+        {
+          id: 'barrel',
+          shape: 'cone',
+          radius: 0.033,
+          topRadius: 0.015,
+          length: 0.84,
+          rotationDeg: [180, 0, 0],
+          position: [0, 0, 0.84],
+          density: 650,
+        },
+      ],
+      spin,
+    };
     const without = analyzePart(doc);
     expect(without.checks.find((c) => c.id === 'bat.pivot-moment')!.status).toBe('not-evaluated');
     const r = analyzePart({ ...doc, grip: { point: [0, 0, 0], axis: [0, 0, 1], faceNormal: [0, 1, 0] } });
@@ -156,13 +202,45 @@ describe('category checks (each indicative, naming its rule)', () => {
 });
 
 describe('mesh primitives in a part', () => {
-  const box = { vertices: [[0, 0, 0], [0.1, 0, 0], [0, 0.2, 0], [0.1, 0.2, 0], [0, 0, 0.3], [0.1, 0, 0.3], [0, 0.2, 0.3], [0.1, 0.2, 0.3]], triangles: [[0, 4, 6], [0, 6, 2], [1, 3, 7], [1, 7, 5], [0, 1, 5], [0, 5, 4], [2, 6, 7], [2, 7, 3], [0, 2, 3], [0, 3, 1], [4, 5, 7], [4, 7, 6]] };
+  const box = {
+    vertices: [
+      [0, 0, 0],
+      [0.1, 0, 0],
+      [0, 0.2, 0],
+      [0.1, 0.2, 0],
+      [0, 0, 0.3],
+      [0.1, 0, 0.3],
+      [0, 0.2, 0.3],
+      [0.1, 0.2, 0.3],
+    ],
+    triangles: [
+      [0, 4, 6],
+      [0, 6, 2],
+      [1, 3, 7],
+      [1, 7, 5],
+      [0, 1, 5],
+      [0, 5, 4],
+      [2, 6, 7],
+      [2, 7, 3],
+      [0, 2, 3],
+      [0, 3, 1],
+      [4, 5, 7],
+      [4, 7, 6],
+    ],
+  };
   it('an inline mesh box (in mm at scale 0.001 or in m) equals the box primitive', () => {
-    const prim = analyzePart({ primitives: [{ id: 'b', shape: 'box', size: [0.1, 0.2, 0.3], position: [0.05, 0.1, 0.15], density: 800 }], spin: { axis: [0, 0, 1], rate: 1 } });
+    const prim = analyzePart({
+      primitives: [{ id: 'b', shape: 'box', size: [0.1, 0.2, 0.3], position: [0.05, 0.1, 0.15], density: 800 }],
+      spin: { axis: [0, 0, 1], rate: 1 },
+    });
     const mm = { vertices: box.vertices.map((v) => v.map((x) => x * 1000)), triangles: box.triangles };
-    const mesh = analyzePart({ primitives: [{ id: 'm', shape: 'mesh', ...mm, scale: 0.001, density: 800 }], spin: { axis: [0, 0, 1], rate: 1 } });
+    const mesh = analyzePart({
+      primitives: [{ id: 'm', shape: 'mesh', ...mm, scale: 0.001, density: 800 }],
+      spin: { axis: [0, 0, 1], rate: 1 },
+    });
     expectRelClose(mesh.mass, prim.mass, 1e-13);
-    for (let i = 0; i < 3; i++) for (let j = 0; j < 3; j++) expectAbsClose(mesh.inertia[i][j], prim.inertia[i][j], 1e-13 * prim.inertia[2][2]);
+    for (let i = 0; i < 3; i++)
+      for (let j = 0; j < 3; j++) expectAbsClose(mesh.inertia[i][j], prim.inertia[i][j], 1e-13 * prim.inertia[2][2]);
     expect(mesh.trade.length).toBeNull(); // no grip frame, no length along it
   });
   it('a meshId resolves through the caller; an open mesh is refused naming the field', () => {

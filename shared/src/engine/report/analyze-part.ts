@@ -7,7 +7,13 @@ import { EngineInputError } from '../part/engine-input-error';
 import { partMassProperties, type PartMassProperties, type PartResolvers } from '../part/part-mass-properties';
 import { partExtent, partReach } from '../part/part-reach';
 import { validatePartDocument } from '../part/validate-part-document';
-import { createPrincipalAxes, EQUAL_MOMENTS_ANALYTIC, EQUAL_MOMENTS_MESH, principalAxes, type PrincipalAxes } from '../principal/principal-axes';
+import {
+  createPrincipalAxes,
+  EQUAL_MOMENTS_ANALYTIC,
+  EQUAL_MOMENTS_MESH,
+  principalAxes,
+  type PrincipalAxes,
+} from '../principal/principal-axes';
 import { assessSpin } from '../spin/assess-spin';
 import type { VerdictThresholds } from '../spin/verdict-thresholds';
 import { BAT_PIVOT_DISTANCE, radiusOfGyration, tradeFigures } from '../trade/trade-figures';
@@ -45,15 +51,30 @@ export function analyzeValidatedPart(doc: PartDocument, options: AnalyzeOptions 
 }
 
 /** Principal axes with the equality tolerance of MECHANICS §3 and the grip axis, then face normal, preferred inside an equal pair. */
-export function principalOfPart(doc: PartDocument, mp: PartMassProperties, equalMoments?: number, out: PrincipalAxes = createPrincipalAxes()): PrincipalAxes {
+export function principalOfPart(
+  doc: PartDocument,
+  mp: PartMassProperties,
+  equalMoments?: number,
+  out: PrincipalAxes = createPrincipalAxes(),
+): PrincipalAxes {
   const prefs = doc.grip ? [doc.grip.axis, doc.grip.faceNormal, doc.spin.axis] : [doc.spin.axis];
   principalAxes(out, mp.body.inertia, equalMoments ?? (mp.hasMesh ? EQUAL_MOMENTS_MESH : EQUAL_MOMENTS_ANALYTIC), prefs);
   const [i1, i2, i3] = out.moments;
   if (!(i3 > 1e-14 * i1) || !(i1 > 0)) {
-    throw new EngineInputError('unanalysable', [{ path: 'primitives', message: 'the part has no rotational inertia about some axis (only point masses on a line?): add a solid primitive' }]);
+    throw new EngineInputError('unanalysable', [
+      {
+        path: 'primitives',
+        message: 'the part has no rotational inertia about some axis (only point masses on a line?): add a solid primitive',
+      },
+    ]);
   }
   if (i2 + i3 < i1 * (1 - 1e-9)) {
-    throw new EngineInputError('unanalysable', [{ path: 'primitives', message: 'the principal moments break the triangle inequality: a removal reaches outside the material it cuts' }]);
+    throw new EngineInputError('unanalysable', [
+      {
+        path: 'primitives',
+        message: 'the principal moments break the triangle inequality: a removal reaches outside the material it cuts',
+      },
+    ]);
   }
   return out;
 }
@@ -84,8 +105,12 @@ function buildReport(doc: PartDocument, mp: PartMassProperties, principal: Princ
     division: options.division ?? doc.division ?? 'men',
   });
   const notes = [...STANDARD_NOTES, ...spinNotes];
-  if (!grip) notes.push('No grip frame (grip.point, grip.axis, grip.faceNormal) was given, so balance point, swingweight, recoil weight, twistweight and the pivot figures are not computed.');
-  const m = principal.moments, mass = body.mass;
+  if (!grip)
+    notes.push(
+      'No grip frame (grip.point, grip.axis, grip.faceNormal) was given, so balance point, swingweight, recoil weight, twistweight and the pivot figures are not computed.',
+    );
+  const m = principal.moments,
+    mass = body.mass;
   const report: SpinReport = {
     name: doc.name ?? null,
     mass,
@@ -101,13 +126,20 @@ function buildReport(doc: PartDocument, mp: PartMassProperties, principal: Princ
       twistweight: trade?.twistweight ?? null,
       pivot: trade?.pivot ?? null,
       length: grip ? extent(grip.axis) : null,
-      radiusOfGyration: { major: radiusOfGyration(m[0], mass), intermediate: radiusOfGyration(m[1], mass), minor: radiusOfGyration(m[2], mass) },
+      radiusOfGyration: {
+        major: radiusOfGyration(m[0], mass),
+        intermediate: radiusOfGyration(m[1], mass),
+        minor: radiusOfGyration(m[2], mass),
+      },
     },
     checks,
     notes,
   };
   const bad = firstNonFinite(report, '');
-  if (bad !== null) throw new EngineInputError('unanalysable', [{ path: 'primitives', message: `the part gives a non-finite ${bad}; check its dimensions and densities` }]);
+  if (bad !== null)
+    throw new EngineInputError('unanalysable', [
+      { path: 'primitives', message: `the part gives a non-finite ${bad}; check its dimensions and densities` },
+    ]);
   return report;
 }
 

@@ -42,15 +42,32 @@ export class PartModel {
     private readonly mp: PartMassProperties,
     tolerances: { default?: Tolerance; primitives?: Record<string, Tolerance> } = {},
   ) {
-    this.bodies = mp.pieces.map((p) => createBody());
+    this.bodies = mp.pieces.map(() => createBody());
     this.dims = mp.pieces.map((p) => [...p.dimensions]);
     mp.pieces.forEach((piece, k) => {
       const p = piece.primitive;
       const tol = { ...DEFAULT_TOLERANCE, ...tolerances.default, ...piece.tolerance, ...tolerances.primitives?.[p.id] };
-      this.parameters.push({ piece: k, primitiveId: p.id, name: p.shape === 'point' ? 'mass' : 'density', slot: -1, nominal: 1, physical: p.shape === 'point' ? p.mass! : piece.density, sigma: tol.density });
+      this.parameters.push({
+        piece: k,
+        primitiveId: p.id,
+        name: p.shape === 'point' ? 'mass' : 'density',
+        slot: -1,
+        nominal: 1,
+        physical: p.shape === 'point' ? p.mass! : piece.density,
+        sigma: tol.density,
+      });
       if (p.shape === 'mesh') return;
       DIMENSION_NAMES[p.shape].forEach((name, slot) => {
-        if (piece.present[slot]) this.parameters.push({ piece: k, primitiveId: p.id, name, slot, nominal: piece.dimensions[slot], physical: piece.dimensions[slot], sigma: tol.size });
+        if (piece.present[slot])
+          this.parameters.push({
+            piece: k,
+            primitiveId: p.id,
+            name,
+            slot,
+            nominal: piece.dimensions[slot],
+            physical: piece.dimensions[slot],
+            sigma: tol.size,
+          });
       });
     });
     this.values = Float64Array.from(this.parameters, (q) => q.nominal);
@@ -74,7 +91,9 @@ export class PartModel {
     const pieces = this.mp.pieces;
     let pi = 0;
     for (let k = 0; k < pieces.length; k++) {
-      const piece = pieces[k], p = piece.primitive, b = this.bodies[k];
+      const piece = pieces[k],
+        p = piece.primitive,
+        b = this.bodies[k];
       const factor = this.values[pi];
       while (pi < this.parameters.length && this.parameters[pi].piece === k) pi++;
       if (p.shape === 'point') {

@@ -5,7 +5,13 @@ import { EngineInputError, formatPath } from '../part/engine-input-error';
 import { partMassProperties, type PartResolvers } from '../part/part-mass-properties';
 import { validatePartDocument } from '../part/validate-part-document';
 import { principalOfPart } from '../report/analyze-part';
-import { createPrincipalAxes, EQUAL_MOMENTS_ANALYTIC, EQUAL_MOMENTS_MESH, principalAxes, type PrincipalAxes } from '../principal/principal-axes';
+import {
+  createPrincipalAxes,
+  EQUAL_MOMENTS_ANALYTIC,
+  EQUAL_MOMENTS_MESH,
+  principalAxes,
+  type PrincipalAxes,
+} from '../principal/principal-axes';
 import { classifySpin, type AxisRole } from '../spin/classify-spin';
 import { DEFAULT_VERDICT_THRESHOLDS, type Verdict, type VerdictThresholds } from '../spin/verdict-thresholds';
 import { momentAboutLine } from '../trade/moment-about-line';
@@ -24,8 +30,14 @@ export const scatterInputSchema = z.object({
       primitives: z.record(z.string(), toleranceSchema).optional(),
     })
     .optional(),
-  samples: z.int({ error: 'must be a whole number' }).min(10, { error: 'must be at least 10' }).max(MAX_SCATTER_SAMPLES, { error: `must be at most ${MAX_SCATTER_SAMPLES}` }),
-  seed: z.int({ error: 'must be a whole number' }).min(0, { error: 'must not be negative' }).max(4294967295, { error: 'must fit in 32 bits' }),
+  samples: z
+    .int({ error: 'must be a whole number' })
+    .min(10, { error: 'must be at least 10' })
+    .max(MAX_SCATTER_SAMPLES, { error: `must be at most ${MAX_SCATTER_SAMPLES}` }),
+  seed: z
+    .int({ error: 'must be a whole number' })
+    .min(0, { error: 'must not be negative' })
+    .max(4294967295, { error: 'must fit in 32 bits' }),
 });
 export type ScatterInput = z.input<typeof scatterInputSchema>;
 
@@ -75,12 +87,24 @@ export type ScatterProgress = (done: number, total: number) => void;
  * Tolerance precedence: study per primitive > primitive document > material > study default > 5 %
  * density, 0 size. Throws EngineInputError for bad input (paths under `part.` for the document).
  */
-export function runScatterStudy(input: unknown, onProgress?: ScatterProgress, options: PartResolvers & { thresholds?: Partial<VerdictThresholds> } = {}): ScatterResult {
+export function runScatterStudy(
+  input: unknown,
+  onProgress?: ScatterProgress,
+  options: PartResolvers & { thresholds?: Partial<VerdictThresholds> } = {},
+): ScatterResult {
   const parsed = scatterInputSchema.safeParse(input);
-  if (!parsed.success) throw new EngineInputError('invalid', parsed.error.issues.map((i) => ({ path: formatPath(i.path), message: i.message })));
+  if (!parsed.success)
+    throw new EngineInputError(
+      'invalid',
+      parsed.error.issues.map((i) => ({ path: formatPath(i.path), message: i.message })),
+    );
   const { samples, seed, tolerances } = parsed.data;
   const v = validatePartDocument(parsed.data.part);
-  if (!v.ok) throw new EngineInputError('invalid', v.errors.map((e) => ({ path: e.path ? `part.${e.path}` : 'part', message: e.message })));
+  if (!v.ok)
+    throw new EngineInputError(
+      'invalid',
+      v.errors.map((e) => ({ path: e.path ? `part.${e.path}` : 'part', message: e.message })),
+    );
   const doc = v.value;
   const mp = partMassProperties(doc, options);
   const nominalPrincipal = principalOfPart(doc, mp, options.thresholds?.equalMoments);
@@ -92,15 +116,32 @@ export function runScatterStudy(input: unknown, onProgress?: ScatterProgress, op
   const model = new PartModel(doc, mp, tolerances);
 
   const grip = doc.grip;
-  const swing = grip ? [grip.axis[1] * grip.faceNormal[2] - grip.axis[2] * grip.faceNormal[1], grip.axis[2] * grip.faceNormal[0] - grip.axis[0] * grip.faceNormal[2], grip.axis[0] * grip.faceNormal[1] - grip.axis[1] * grip.faceNormal[0]] : null;
-  const names = ['mass', 'marginMajor', 'marginMinor', 'momentMajor', 'momentIntermediate', 'momentMinor', ...(grip ? ['balancePoint', 'swingweight', 'twistweight'] : [])];
+  const swing = grip
+    ? [
+        grip.axis[1] * grip.faceNormal[2] - grip.axis[2] * grip.faceNormal[1],
+        grip.axis[2] * grip.faceNormal[0] - grip.axis[0] * grip.faceNormal[2],
+        grip.axis[0] * grip.faceNormal[1] - grip.axis[1] * grip.faceNormal[0],
+      ]
+    : null;
+  const names = [
+    'mass',
+    'marginMajor',
+    'marginMinor',
+    'momentMajor',
+    'momentIntermediate',
+    'momentMinor',
+    ...(grip ? ['balancePoint', 'swingweight', 'twistweight'] : []),
+  ];
   const series = names.map(() => new Float64Array(samples));
   const body = createBody();
   const pa = createPrincipalAxes();
-  const at = (d: number) => (grip ? [grip.point[0] + d * grip.axis[0], grip.point[1] + d * grip.axis[1], grip.point[2] + d * grip.axis[2]] : [0, 0, 0]);
+  const at = (d: number) =>
+    grip ? [grip.point[0] + d * grip.axis[0], grip.point[1] + d * grip.axis[1], grip.point[2] + d * grip.axis[2]] : [0, 0, 0];
   const swingPoint = at(0.1);
   const rng = new SeededRandom(seed);
-  let redraws = 0, verdictChanged = 0, roleChanged = 0;
+  let redraws = 0,
+    verdictChanged = 0,
+    roleChanged = 0;
   const verdictCounts: Record<Verdict, number> = { steady: 0, watch: 0, 'flip-prone': 0 };
   const params = model.parameters;
   const every = Math.max(1, Math.floor(samples / 100));
@@ -112,7 +153,13 @@ export function runScatterStudy(input: unknown, onProgress?: ScatterProgress, op
       }
       if (model.valid()) break;
       redraws++;
-      if (attempt > 50) throw new EngineInputError('unanalysable', [{ path: 'tolerances', message: 'the tolerances are so wide that most draws break a shape rule (e.g. inner radius above the outer one)' }]);
+      if (attempt > 50)
+        throw new EngineInputError('unanalysable', [
+          {
+            path: 'tolerances',
+            message: 'the tolerances are so wide that most draws break a shape rule (e.g. inner radius above the outer one)',
+          },
+        ]);
     }
     model.evaluate(body);
     principalAxes(pa, body.inertia, eqTol, prefs);
@@ -125,7 +172,8 @@ export function runScatterStudy(input: unknown, onProgress?: ScatterProgress, op
     series[4][s] = I[1];
     series[5][s] = I[2];
     if (grip && swing) {
-      const u = grip.axis, p = grip.point;
+      const u = grip.axis,
+        p = grip.point;
       series[6][s] = (body.center[0] - p[0]) * u[0] + (body.center[1] - p[1]) * u[1] + (body.center[2] - p[2]) * u[2];
       series[7][s] = momentAboutLine(body, swingPoint, swing);
       series[8][s] = momentAboutLine(body, p, u);
@@ -144,17 +192,26 @@ export function runScatterStudy(input: unknown, onProgress?: ScatterProgress, op
     'Each tolerance is taken as one standard deviation of a normal distribution; density scatter is relative (a share of the nominal), size scatter an absolute length.',
     'Figures are engineering estimates from idealised geometry and nominal densities.',
   ];
-  if (params.every((q) => q.slot < 0 || q.sigma === 0)) notes.push('No size tolerance was given, so only densities were varied; sensitivities to dimensions are still listed.');
+  if (params.every((q) => q.slot < 0 || q.sigma === 0))
+    notes.push('No size tolerance was given, so only densities were varied; sensitivities to dimensions are still listed.');
   if (mp.hasMesh) notes.push('Mesh primitives vary in density only.');
   return {
     samples,
     seed,
     redraws,
-    nominal: { margins: { major: (m0[0] - m0[1]) / m0[1], minor: (m0[1] - m0[2]) / m0[1] }, verdict: nominalClass.verdict, nearestAxis: nominalClass.nearestAxis },
+    nominal: {
+      margins: { major: (m0[0] - m0[1]) / m0[1], minor: (m0[1] - m0[2]) / m0[1] },
+      verdict: nominalClass.verdict,
+      nearestAxis: nominalClass.nearestAxis,
+    },
     distributions,
     verdictChangedShare: verdictChanged / samples,
     axisRoleChangedShare: roleChanged / samples,
-    verdictShares: { steady: verdictCounts.steady / samples, watch: verdictCounts.watch / samples, 'flip-prone': verdictCounts['flip-prone'] / samples },
+    verdictShares: {
+      steady: verdictCounts.steady / samples,
+      watch: verdictCounts.watch / samples,
+      'flip-prone': verdictCounts['flip-prone'] / samples,
+    },
     sensitivities,
     notes,
   };
@@ -164,7 +221,13 @@ export function runScatterStudy(input: unknown, onProgress?: ScatterProgress, op
  * ∂margin/∂parameter by central differences at the nominal design, step 1e-6 of the parameter's
  * scale (relative for density, of the dimension for sizes), then ranked by the larger |perPercent|.
  */
-function sensitivitiesOf(model: PartModel, eqTol: number, prefs: readonly (readonly number[])[], body: Body, pa: PrincipalAxes): Sensitivity[] {
+function sensitivitiesOf(
+  model: PartModel,
+  eqTol: number,
+  prefs: readonly (readonly number[])[],
+  body: Body,
+  pa: PrincipalAxes,
+): Sensitivity[] {
   const margins = () => {
     model.evaluate(body);
     principalAxes(pa, body.inertia, eqTol, prefs);

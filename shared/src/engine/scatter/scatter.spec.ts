@@ -6,8 +6,25 @@ import { summarize } from './summarize';
 
 const racket = {
   primitives: [
-    { id: 'handle', shape: 'cylinder', radius: 0.014, length: 0.2, position: [0, 0, 0.1], density: 650, tolerance: { density: 0.05, size: 0.0002 } },
-    { id: 'hoop', shape: 'torus', majorRadius: 0.11, minorRadius: 0.008, position: [0, 0, 0.42], rotationDeg: [90, 0, 0], density: 1500, tolerance: { density: 0.03, size: 0.0002 } },
+    {
+      id: 'handle',
+      shape: 'cylinder',
+      radius: 0.014,
+      length: 0.2,
+      position: [0, 0, 0.1],
+      density: 650,
+      tolerance: { density: 0.05, size: 0.0002 },
+    },
+    {
+      id: 'hoop',
+      shape: 'torus',
+      majorRadius: 0.11,
+      minorRadius: 0.008,
+      position: [0, 0, 0.42],
+      rotationDeg: [90, 0, 0],
+      density: 1500,
+      tolerance: { density: 0.03, size: 0.0002 },
+    },
     { id: 'throat', shape: 'box', size: [0.02, 0.015, 0.12], position: [0, 0, 0.25], density: 1500 },
   ],
   spin: { axis: [0, 1, 0], rate: 20 },
@@ -16,7 +33,8 @@ const racket = {
 
 describe('seeded random numbers', () => {
   it('are reproducible, and the normal draws have mean ≈ 0 and standard deviation ≈ 1', () => {
-    const a = new SeededRandom(7), b = new SeededRandom(7);
+    const a = new SeededRandom(7),
+      b = new SeededRandom(7);
     for (let i = 0; i < 5; i++) expect(a.nextUint32()).toBe(b.nextUint32());
     const r = new SeededRandom(42);
     const x = Float64Array.from({ length: 40000 }, () => r.normal());
@@ -48,11 +66,19 @@ describe('runScatterStudy', () => {
   });
 
   it('zero tolerances give a single point; a marginal design changes verdict in part of the samples', () => {
-    const none = runScatterStudy({ part: racket, samples: 50, seed: 3, tolerances: { default: { density: 0, size: 0 }, primitives: { handle: { density: 0, size: 0 }, hoop: { density: 0, size: 0 } } } });
+    const none = runScatterStudy({
+      part: racket,
+      samples: 50,
+      seed: 3,
+      tolerances: { default: { density: 0, size: 0 }, primitives: { handle: { density: 0, size: 0 }, hoop: { density: 0, size: 0 } } },
+    });
     expect(none.distributions.marginMajor.std).toBe(0);
     // A 200 × 196 × 50 mm plate spun about y: y is the intermediate axis only while the 200 mm edge is the longer one
     // (box moments, Machinery's Handbook); a 3 mm size scatter swaps the two edges in roughly P(N(0, 4.2 mm) > 4 mm) ≈ 17 % of draws.
-    const marginal = { primitives: [{ id: 'plate', shape: 'box', size: [0.2, 0.196, 0.05], density: 800, tolerance: { density: 0, size: 0.003 } }], spin: { axis: [0, 1, 0], rate: 5 } };
+    const marginal = {
+      primitives: [{ id: 'plate', shape: 'box', size: [0.2, 0.196, 0.05], density: 800, tolerance: { density: 0, size: 0.003 } }],
+      spin: { axis: [0, 1, 0], rate: 5 },
+    };
     const r = runScatterStudy({ part: marginal, samples: 4000, seed: 4 });
     expect(r.nominal.verdict).toBe('flip-prone');
     expect(r.axisRoleChangedShare).toBeGreaterThan(0.14);
@@ -83,6 +109,8 @@ describe('runScatterStudy', () => {
     runScatterStudy({ part: racket, samples: 200, seed: 1 }, (done) => seen.push(done));
     expect(seen[seen.length - 1]).toBe(200);
     expect(() => runScatterStudy({ part: racket, samples: 5, seed: 1 })).toThrow(/samples/);
-    expect(() => runScatterStudy({ part: { ...racket, spin: { axis: [0, 2, 0], rate: 1 } }, samples: 50, seed: 1 })).toThrow(/part\.spin\.axis/);
+    expect(() => runScatterStudy({ part: { ...racket, spin: { axis: [0, 2, 0], rate: 1 } }, samples: 50, seed: 1 })).toThrow(
+      /part\.spin\.axis/,
+    );
   });
 });

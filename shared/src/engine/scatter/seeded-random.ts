@@ -52,7 +52,8 @@ export class SeededRandom {
       return s;
     }
     for (;;) {
-      const u = 2 * this.uniform() - 1, v = 2 * this.uniform() - 1;
+      const u = 2 * this.uniform() - 1,
+        v = 2 * this.uniform() - 1;
       const q = u * u + v * v;
       if (q > 0 && q < 1) {
         const f = Math.sqrt((-2 * Math.log(q)) / q);

@@ -18,7 +18,8 @@ export interface Distribution {
  */
 export function summarize(values: Float64Array, bins = 20): Distribution {
   const n = values.length;
-  let mean = 0, m2 = 0;
+  let mean = 0,
+    m2 = 0;
   for (let i = 0; i < n; i++) {
     const d = values[i] - mean;
     mean += d / (i + 1);
@@ -26,12 +27,24 @@ export function summarize(values: Float64Array, bins = 20): Distribution {
   }
   values.sort();
   const q = (p: number) => {
-    const h = (n - 1) * p, lo = Math.floor(h), hi = Math.min(n - 1, lo + 1);
+    const h = (n - 1) * p,
+      lo = Math.floor(h),
+      hi = Math.min(n - 1, lo + 1);
     return values[lo] + (h - lo) * (values[hi] - values[lo]);
   };
-  const min = values[0], max = values[n - 1];
+  const min = values[0],
+    max = values[n - 1];
   const counts = new Array<number>(bins).fill(0);
   const width = (max - min) / bins;
   for (let i = 0; i < n; i++) counts[width > 0 ? Math.min(bins - 1, Math.floor((values[i] - min) / width)) : 0]++;
-  return { mean, std: n > 1 ? Math.sqrt(m2 / (n - 1)) : 0, min, max, p05: q(0.05), p50: q(0.5), p95: q(0.95), histogram: { from: min, to: max, counts } };
+  return {
+    mean,
+    std: n > 1 ? Math.sqrt(m2 / (n - 1)) : 0,
+    min,
+    max,
+    p05: q(0.05),
+    p50: q(0.5),
+    p95: q(0.95),
+    histogram: { from: min, to: max, counts },
+  };
 }

@@ -57,11 +57,15 @@ export function assessSpin(input: SpinInput): { spin: SpinAssessment; notes: str
   const rate = input.rate;
   const c = classifySpin(input.principal, input.axis, input.dissipative, t);
   const { nearestAxis, misalignmentDeg, verdict, inBody: b } = c;
-  let growthRate: number | null = null, eFoldingTime: number | null = null, flipTime: number | null = null, wobble: number | null = null;
+  let growthRate: number | null = null,
+    eFoldingTime: number | null = null,
+    flipTime: number | null = null,
+    wobble: number | null = null;
   let explanation: string;
   if (c.spherical) {
     wobble = 0;
-    explanation = 'All three principal moments are equal (spherical inertia): every axis is a principal axis and spin about any of them stays as it is.';
+    explanation =
+      'All three principal moments are equal (spherical inertia): every axis is a principal axis and spin about any of them stays as it is.';
   } else if (c.neutral) {
     wobble = 0;
     explanation =

@@ -42,17 +42,21 @@ export function classifySpin(principal: PrincipalAxes, axis: ArrayLike<number>, 
     nearestAxis = 'major';
     misalignmentDeg = 0;
   } else if (equalPairs[0]) {
-    const toPair = angleToPlaneOf(2), toMinor = angleTo(2);
+    const toPair = angleToPlaneOf(2),
+      toMinor = angleTo(2);
     neutral = toPair <= toMinor;
     nearestAxis = neutral ? 'major' : 'minor';
     misalignmentDeg = Math.min(toPair, toMinor);
   } else if (equalPairs[1]) {
-    const toPair = angleToPlaneOf(0), toMajor = angleTo(0);
+    const toPair = angleToPlaneOf(0),
+      toMajor = angleTo(0);
     neutral = toPair < toMajor;
     nearestAxis = neutral ? 'minor' : 'major';
     misalignmentDeg = Math.min(toPair, toMajor);
   } else {
-    const a0 = angleTo(0), a1 = angleTo(1), a2 = angleTo(2);
+    const a0 = angleTo(0),
+      a1 = angleTo(1),
+      a2 = angleTo(2);
     if (a1 <= a0 && a1 <= a2) {
       nearestAxis = 'intermediate';
       misalignmentDeg = a1;

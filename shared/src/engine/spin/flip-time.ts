@@ -29,7 +29,8 @@ export function intermediateFlipTime(
   } else {
     const tx = perp > 1e-12 ? axisInBody[0] / perp : 1;
     const tz = perp > 1e-12 ? axisInBody[2] / perp : 0;
-    const c = Math.cos(misalignmentDeg * DEG), sn = Math.sin(misalignmentDeg * DEG);
+    const c = Math.cos(misalignmentDeg * DEG),
+      sn = Math.sin(misalignmentDeg * DEG);
     w0 = [rate * sn * tx, rate * s * c, rate * sn * tz];
   }
   const exact = exactTorqueFree(moments, w0);

@@ -29,7 +29,8 @@ describe('linearised Euler equations (Landau & Lifshitz, Mechanics, §37)', () =
 
 describe('flip time from the exact elliptic period', () => {
   it('approaches the near-separatrix logarithmic form ln(4/k′)/λ as the misalignment shrinks (DLMF 19.12.1)', () => {
-    const I = [6.5, 5, 2.5], rate = 1;
+    const I = [6.5, 5, 2.5],
+      rate = 1;
     const lambda = intermediateGrowthRate(6.5, 5, 2.5, rate);
     for (const deg of [1e-2, 1e-4]) {
       const { flipTime } = intermediateFlipTime(I, [0, 1, 0], rate, deg);
@@ -75,7 +76,9 @@ describe('assessSpin verdicts (thresholds documented in VerdictThresholds)', () 
     const close = assessSpin({ ...base, principal: principal([5.2, 5, 2.5]), axis: [1, 0, 0] }).spin;
     expect(close.verdict).toBe('watch');
     // Configurable: a 3 % threshold lets the 4 % margin pass.
-    expect(assessSpin({ ...base, principal: principal([5.2, 5, 2.5]), axis: [1, 0, 0], thresholds: { watchMomentFraction: 0.03 } }).spin.verdict).toBe('steady');
+    expect(
+      assessSpin({ ...base, principal: principal([5.2, 5, 2.5]), axis: [1, 0, 0], thresholds: { watchMomentFraction: 0.03 } }).spin.verdict,
+    ).toBe('steady');
   });
 
   it('a misalignment beyond 10° from the nearest (stable) axis → watch', () => {

@@ -7,9 +7,17 @@ export interface IndexedMesh {
 /** Axis-aligned box a×b×c centred on `center`: 8 vertices, 12 triangles. */
 export function boxMesh(a: number, b: number, c: number, center: readonly number[] = [0, 0, 0]): IndexedMesh {
   const v: number[] = [];
-  for (let i = 0; i < 8; i++) v.push(center[0] + (i & 1 ? a / 2 : -a / 2), center[1] + (i & 2 ? b / 2 : -b / 2), center[2] + (i & 4 ? c / 2 : -c / 2));
+  for (let i = 0; i < 8; i++)
+    v.push(center[0] + (i & 1 ? a / 2 : -a / 2), center[1] + (i & 2 ? b / 2 : -b / 2), center[2] + (i & 4 ? c / 2 : -c / 2));
   // Faces as quads (outward): −x, +x, −y, +y, −z, +z.
-  const quads = [[0, 4, 6, 2], [1, 3, 7, 5], [0, 1, 5, 4], [2, 6, 7, 3], [0, 2, 3, 1], [4, 5, 7, 6]];
+  const quads = [
+    [0, 4, 6, 2],
+    [1, 3, 7, 5],
+    [0, 1, 5, 4],
+    [2, 6, 7, 3],
+    [0, 2, 3, 1],
+    [4, 5, 7, 6],
+  ];
   const t: number[] = [];
   for (const [p, q, r, s] of quads) t.push(p, q, r, p, r, s);
   return { vertices: Float64Array.from(v), triangles: Uint32Array.from(t) };
@@ -32,9 +40,16 @@ export function torusMesh(R: number, a: number, n: number, m: number): IndexedMe
   let o = 0;
   for (let i = 0; i < n; i++) {
     for (let j = 0; j < m; j++) {
-      const p = i * m + j, q = ((i + 1) % n) * m + j, r = ((i + 1) % n) * m + ((j + 1) % m), s = i * m + ((j + 1) % m);
-      t[o++] = p; t[o++] = q; t[o++] = r;
-      t[o++] = p; t[o++] = r; t[o++] = s;
+      const p = i * m + j,
+        q = ((i + 1) % n) * m + j,
+        r = ((i + 1) % n) * m + ((j + 1) % m),
+        s = i * m + ((j + 1) % m);
+      t[o++] = p;
+      t[o++] = q;
+      t[o++] = r;
+      t[o++] = p;
+      t[o++] = r;
+      t[o++] = s;
     }
   }
   return { vertices: v, triangles: t };

@@ -17,6 +17,16 @@ export function compoundPendulumMoment(mass: number, pivotToCentre: number, peri
  * Source: the small-oscillation analysis of the trifilar suspension (e.g. du Bois, Lieven & Adhikari,
  * "Error analysis in trifilar inertia measurements", Experimental Techniques 33(2), 2009).
  */
-export function trifilarMoment(wireRadius: number, wireLength: number, period: number, platformMass: number, partMass: number, platformMoment: number, g = STANDARD_GRAVITY): number {
-  return (g * wireRadius * wireRadius * period * period * (platformMass + partMass)) / (4 * Math.PI * Math.PI * wireLength) - platformMoment;
+export function trifilarMoment(
+  wireRadius: number,
+  wireLength: number,
+  period: number,
+  platformMass: number,
+  partMass: number,
+  platformMoment: number,
+  g = STANDARD_GRAVITY,
+): number {
+  return (
+    (g * wireRadius * wireRadius * period * period * (platformMass + partMass)) / (4 * Math.PI * Math.PI * wireLength) - platformMoment
+  );
 }

@@ -7,10 +7,17 @@ import type { Body } from '../composition/body';
  */
 export function momentAboutLine(body: Body, point: ArrayLike<number>, dir: ArrayLike<number>): number {
   const j = body.inertia;
-  const ux = dir[0], uy = dir[1], uz = dir[2];
-  const own = ux * (j[0] * ux + j[1] * uy + j[2] * uz) + uy * (j[3] * ux + j[4] * uy + j[5] * uz) + uz * (j[6] * ux + j[7] * uy + j[8] * uz);
-  const rx = body.center[0] - point[0], ry = body.center[1] - point[1], rz = body.center[2] - point[2];
+  const ux = dir[0],
+    uy = dir[1],
+    uz = dir[2];
+  const own =
+    ux * (j[0] * ux + j[1] * uy + j[2] * uz) + uy * (j[3] * ux + j[4] * uy + j[5] * uz) + uz * (j[6] * ux + j[7] * uy + j[8] * uz);
+  const rx = body.center[0] - point[0],
+    ry = body.center[1] - point[1],
+    rz = body.center[2] - point[2];
   // |r⊥|² = |r × u|², free of the cancellation in |r|² − (r·u)².
-  const cx = ry * uz - rz * uy, cy = rz * ux - rx * uz, cz = rx * uy - ry * ux;
+  const cx = ry * uz - rz * uy,
+    cy = rz * ux - rx * uz,
+    cz = rx * uy - ry * ux;
   return own + body.mass * (cx * cx + cy * cy + cz * cz);
 }

@@ -36,7 +36,9 @@ export interface TradeFigures {
  * I_pivot/(m·d) from ASTM F2398.
  */
 export function tradeFigures(body: Body, grip: GripFrame, pivotDistance = BAT_PIVOT_DISTANCE): TradeFigures {
-  const p = grip.point, u = grip.axis, n = grip.faceNormal;
+  const p = grip.point,
+    u = grip.axis,
+    n = grip.faceNormal;
   const swing = [u[1] * n[2] - u[2] * n[1], u[2] * n[0] - u[0] * n[2], u[0] * n[1] - u[1] * n[0]];
   const along = (d: number) => [p[0] + d * u[0], p[1] + d * u[1], p[2] + d * u[2]];
   const balancePoint = (body.center[0] - p[0]) * u[0] + (body.center[1] - p[1]) * u[1] + (body.center[2] - p[2]) * u[2];

@@ -9,7 +9,9 @@ import { compoundPendulumMoment, STANDARD_GRAVITY, trifilarMoment } from './meas
 import { tradeFigures, SWINGWEIGHT_DISTANCE } from './trade-figures';
 
 const grip = { point: [0, 0, 0], axis: [0, 0, 1], faceNormal: [0, 1, 0] };
-const L = 0.68, r = 0.0125, rho = 700;
+const L = 0.68,
+  r = 0.0125,
+  rho = 700;
 const rod = placeSolid(undefined, cylinderSolid(createSolid(), r, L), rho, identity(mat3()), [0, 0, L / 2]);
 const m = rod.mass;
 
@@ -18,7 +20,7 @@ describe('trade figures of a uniform round rod from its butt', () => {
   it('balance point L/2 (common practice: centre-of-mass distance from the butt)', () => {
     expectRelClose(t.balancePoint, L / 2, 1e-15);
   });
-  it('swingweight about the axis 10 cm from the butt = m(3r² + L²)/12 + m(L/2 − 0.1)² (Machinery\'s Handbook cylinder + parallel axis)', () => {
+  it("swingweight about the axis 10 cm from the butt = m(3r² + L²)/12 + m(L/2 − 0.1)² (Machinery's Handbook cylinder + parallel axis)", () => {
     expectRelClose(t.swingweight, (m * (3 * r * r + L * L)) / 12 + m * (L / 2 - SWINGWEIGHT_DISTANCE) ** 2, 1e-14);
   });
   it('recoil weight = swingweight − m(BP − 10 cm)² (common practice)', () => {
@@ -36,7 +38,7 @@ describe('trade figures of a uniform round rod from its butt', () => {
     tape.center = [0.05, 0, 0.6];
     const sum = composeBodies(undefined, [rod, tape]);
     // The swing axis is long axis × face normal = −x: distance² from the line through (0, 0, 0.1) along x is y² + (z − 0.1)².
-    expectRelClose(tradeFigures(sum, grip).swingweight, t.swingweight + 0.005 * (0.5 ** 2), 1e-13);
+    expectRelClose(tradeFigures(sum, grip).swingweight, t.swingweight + 0.005 * 0.5 ** 2, 1e-13);
   });
 });
 
@@ -46,8 +48,12 @@ describe('measured moments', () => {
     expectRelClose(compoundPendulumMoment(1.2, 0.45, T), (1.2 * 0.9 * 0.9) / 3, 1e-14);
   });
   it('trifilar pendulum: inverts the small-oscillation period T = 2π√(I·L/(M·g·R²)) of a loaded platform (du Bois et al. 2009)', () => {
-    const R = 0.15, Lw = 1.2, Mp = 0.8, Ip = 0.5 * Mp * R * R; // a uniform disc platform
-    const part = 0.3, Ipart = 2.4e-3;
+    const R = 0.15,
+      Lw = 1.2,
+      Mp = 0.8,
+      Ip = 0.5 * Mp * R * R; // a uniform disc platform
+    const part = 0.3,
+      Ipart = 2.4e-3;
     const T = 2 * Math.PI * Math.sqrt(((Ip + Ipart) * Lw) / ((Mp + part) * STANDARD_GRAVITY * R * R));
     expectRelClose(trifilarMoment(R, Lw, T, Mp, part, Ip), Ipart, 1e-12);
   });

@@ -16,6 +16,6 @@ describe('exact unit factors', () => {
 
   it('converts a compound rule limit as mathjs does (5900 g·cm² and 8.3 g/cm)', () => {
     expect(5900 * GRAM * CENTIMETRE ** 2).toBeCloseTo(unit(5900, 'g cm^2').toNumber('kg m^2'), 12);
-    expect(8.3 * GRAM / CENTIMETRE).toBeCloseTo(unit(8.3, 'g/cm').toNumber('kg/m'), 12);
+    expect((8.3 * GRAM) / CENTIMETRE).toBeCloseTo(unit(8.3, 'g/cm').toNumber('kg/m'), 12);
   });
 });

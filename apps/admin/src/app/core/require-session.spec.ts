@@ -33,7 +33,13 @@ describe('requireSession (admin)', () => {
     TestBed.inject(AuthState).setSession({
       accessToken: 'token-one',
       expiresIn: 900,
-      user: { id: '10000000-0000-4000-8000-000000000001', email: 'mira.okafor@example.test', name: 'Mira Okafor', isOperator: false, createdAt: '2026-11-02T09:00:00.000Z' },
+      user: {
+        id: '10000000-0000-4000-8000-000000000001',
+        email: 'mira.okafor@example.test',
+        name: 'Mira Okafor',
+        isOperator: false,
+        createdAt: '2026-11-02T09:00:00.000Z',
+      },
       memberships: [],
     });
     expect(await TestBed.inject(Router).navigateByUrl('/audit')).toBe(true);

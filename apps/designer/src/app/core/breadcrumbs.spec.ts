@@ -16,7 +16,11 @@ describe('Breadcrumbs', () => {
     const nav = host.querySelector('nav')!;
     expect(nav.getAttribute('aria-label')).toBe('Breadcrumb');
     const links = [...nav.querySelectorAll('a')].map((a) => [a.textContent!.trim(), a.getAttribute('href')]);
-    expect(links).toEqual([['Projects', '/'], ['Kestrel Bay discs', '/projects/p-1'], ['Glide 170', '/projects/p-1/parts/part-9']]);
+    expect(links).toEqual([
+      ['Projects', '/'],
+      ['Kestrel Bay discs', '/projects/p-1'],
+      ['Glide 170', '/projects/p-1/parts/part-9'],
+    ]);
     const current = nav.querySelector('[aria-current="page"]')!;
     expect(current.tagName).toBe('SPAN');
     expect(current.textContent!.trim()).toBe('Scatter study');
@@ -30,6 +34,12 @@ describe('Breadcrumbs', () => {
 
   it('puts one separator between steps, linked or not', () => {
     const host = render([{ label: 'Projects', link: '/' }, { label: 'Archived' }, { label: 'Old part' }]);
-    expect([...host.querySelector('nav')!.children].map((e) => e.textContent!.trim())).toEqual(['Projects', '›', 'Archived', '›', 'Old part']);
+    expect([...host.querySelector('nav')!.children].map((e) => e.textContent!.trim())).toEqual([
+      'Projects',
+      '›',
+      'Archived',
+      '›',
+      'Old part',
+    ]);
   });
 });

@@ -47,7 +47,13 @@ export class Breadcrumbs {
 }
 
 /** The trail of a page about one part: Projects › project › part › `page`. */
-export function partTrail(projectId: string, projectName: string | undefined, partId: string, partName: string | undefined, page: string): Crumb[] {
+export function partTrail(
+  projectId: string,
+  projectName: string | undefined,
+  partId: string,
+  partName: string | undefined,
+  page: string,
+): Crumb[] {
   return [
     { label: 'Projects', link: '/', testId: 'crumb-projects' },
     { label: projectName ?? 'Project', link: ['/projects', projectId], testId: 'crumb-project' },

@@ -7,17 +7,51 @@ import type { Part, Project, Variant } from '@tumblewise/shared';
 import { chooseVariant, partPage, type PartPage, variantLabel } from './part-page';
 
 // Invented workspace, project, part and variants (page wiring under test, no figures).
-const WORKSPACE = { id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b', name: 'Harbour Street Gear Lab', state: 'active' as const, createdAt: '2026-11-02T09:00:00.000Z' };
+const WORKSPACE = {
+  id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b',
+  name: 'Harbour Street Gear Lab',
+  state: 'active' as const,
+  createdAt: '2026-11-02T09:00:00.000Z',
+};
 const BASE = `/api/v1/workspaces/${WORKSPACE.id}`;
 const PROJECT_ID = '40000000-0000-4000-8000-000000000001';
 const PART_ID = '50000000-0000-4000-8000-000000000001';
 const OTHER_PART_ID = '50000000-0000-4000-8000-000000000002';
-const PROJECT: Project = { id: PROJECT_ID, name: 'Practice batons', category: 'juggling', notes: '', archived: false, createdAt: WORKSPACE.createdAt, updatedAt: WORKSPACE.createdAt };
+const PROJECT: Project = {
+  id: PROJECT_ID,
+  name: 'Practice batons',
+  category: 'juggling',
+  notes: '',
+  archived: false,
+  createdAt: WORKSPACE.createdAt,
+  updatedAt: WORKSPACE.createdAt,
+};
 const part = (id: string, name: string) =>
-  ({ id, projectId: PROJECT_ID, name, draft: null, draftVersion: 1, latestVariant: null, variantCount: 2, createdAt: WORKSPACE.createdAt, updatedAt: WORKSPACE.createdAt }) as Part;
+  ({
+    id,
+    projectId: PROJECT_ID,
+    name,
+    draft: null,
+    draftVersion: 1,
+    latestVariant: null,
+    variantCount: 2,
+    createdAt: WORKSPACE.createdAt,
+    updatedAt: WORKSPACE.createdAt,
+  }) as Part;
 const variant = (n: number, label: string): Variant => ({
-  id: `60000000-0000-4000-8000-00000000000${n}`, partId: PART_ID, number: n, label, notes: '', document: {}, report: {}, engineVersion: 'test', status: 'draft',
-  author: null, version: 1, createdAt: WORKSPACE.createdAt, updatedAt: WORKSPACE.createdAt,
+  id: `60000000-0000-4000-8000-00000000000${n}`,
+  partId: PART_ID,
+  number: n,
+  label,
+  notes: '',
+  document: {},
+  report: {},
+  engineVersion: 'test',
+  status: 'draft',
+  author: null,
+  version: 1,
+  createdAt: WORKSPACE.createdAt,
+  updatedAt: WORKSPACE.createdAt,
 });
 const V1 = variant(1, 'first cut');
 const V2 = variant(2, 'heavier knob');
@@ -60,8 +94,16 @@ describe('partPage', () => {
     });
     if (signedIn) {
       TestBed.inject(AuthState).setSession({
-        accessToken: 'token-one', expiresIn: 900, memberships: [{ workspace: WORKSPACE, role: 'designer' }],
-        user: { id: '10000000-0000-4000-8000-000000000001', email: 'mira@example.test', name: 'Mira Okafor', isOperator: false, createdAt: WORKSPACE.createdAt },
+        accessToken: 'token-one',
+        expiresIn: 900,
+        memberships: [{ workspace: WORKSPACE, role: 'designer' }],
+        user: {
+          id: '10000000-0000-4000-8000-000000000001',
+          email: 'mira@example.test',
+          name: 'Mira Okafor',
+          isOperator: false,
+          createdAt: WORKSPACE.createdAt,
+        },
       });
     }
     backend = TestBed.inject(HttpTestingController);
@@ -152,7 +194,9 @@ describe('partPage', () => {
     const page = make({ projectId, partId });
     backend.expectOne(`${BASE}/projects/${PROJECT_ID}`).flush(PROJECT);
     backend.expectOne(`${BASE}/parts/${PART_ID}`).flush(part(PART_ID, 'Practice baton'));
-    backend.expectOne(`${BASE}/parts/${PART_ID}/variants`).flush({ error: { code: 'server_error', message: 'The variants are resting.' } }, { status: 500, statusText: 'Server Error' });
+    backend
+      .expectOne(`${BASE}/parts/${PART_ID}/variants`)
+      .flush({ error: { code: 'server_error', message: 'The variants are resting.' } }, { status: 500, statusText: 'Server Error' });
     await settle();
     expect(page.loadError()).toBe('The variants are resting.');
     page.reload();
@@ -168,7 +212,9 @@ describe('partPage', () => {
   it('a project that cannot be read is no load error (it only names a breadcrumb)', async () => {
     start();
     const page = make({ projectId, partId });
-    backend.expectOne(`${BASE}/projects/${PROJECT_ID}`).flush({ error: { code: 'not_found', message: 'Project was not found.' } }, { status: 404, statusText: 'Not Found' });
+    backend
+      .expectOne(`${BASE}/projects/${PROJECT_ID}`)
+      .flush({ error: { code: 'not_found', message: 'Project was not found.' } }, { status: 404, statusText: 'Not Found' });
     backend.expectOne(`${BASE}/parts/${PART_ID}`).flush(part(PART_ID, 'Practice baton'));
     backend.expectOne(`${BASE}/parts/${PART_ID}/variants`).flush([V1]);
     await settle();

@@ -44,7 +44,10 @@ export function partPage(inputs: PartPageInputs) {
     return workspaceId && inputs.projectId ? { workspaceId, projectId: inputs.projectId() } : undefined;
   });
 
-  const project = rxResource({ params: () => projectScope(), stream: ({ params }) => projectsApi.get(params.workspaceId, params.projectId) });
+  const project = rxResource({
+    params: () => projectScope(),
+    stream: ({ params }) => projectsApi.get(params.workspaceId, params.projectId),
+  });
   const part = rxResource({ params: () => scope(), stream: ({ params }) => partsApi.get(params.workspaceId, params.partId) });
   const variants = rxResource({ params: () => scope(), stream: ({ params }) => variantsApi.list(params.workspaceId, params.partId) });
 

@@ -6,7 +6,11 @@ describe('toAuditQuery', () => {
   });
 
   it('turns local days into the start and end of those days as ISO instants', () => {
-    const query = toAuditQuery({ action: 'member.removed', actor: '10000000-0000-4000-8000-000000000001', from: '2026-11-02', to: '2026-11-03' }, 2, 50);
+    const query = toAuditQuery(
+      { action: 'member.removed', actor: '10000000-0000-4000-8000-000000000001', from: '2026-11-02', to: '2026-11-03' },
+      2,
+      50,
+    );
     expect(query.action).toBe('member.removed');
     expect(query.actor).toBe('10000000-0000-4000-8000-000000000001');
     expect(query.page).toBe(2);

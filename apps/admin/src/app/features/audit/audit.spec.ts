@@ -9,7 +9,12 @@ import { AuthState, authInterceptor, errorInterceptor } from '@tumblewise/api-cl
 import type { AuditEvent } from '@tumblewise/shared';
 import { Audit } from './audit';
 
-const WORKSPACE = { id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b', name: 'Harbour Street Gear Lab', state: 'active' as const, createdAt: '2026-11-02T09:00:00.000Z' };
+const WORKSPACE = {
+  id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b',
+  name: 'Harbour Street Gear Lab',
+  state: 'active' as const,
+  createdAt: '2026-11-02T09:00:00.000Z',
+};
 const BASE = `/api/v1/workspaces/${WORKSPACE.id}`;
 
 function events(count: number, offset = 0): AuditEvent[] {
@@ -38,7 +43,13 @@ describe('Audit', () => {
     TestBed.inject(AuthState).setSession({
       accessToken: 'token-one',
       expiresIn: 900,
-      user: { id: '10000000-0000-4000-8000-000000000001', email: 'mira.okafor@example.test', name: 'Mira Okafor', isOperator: false, createdAt: WORKSPACE.createdAt },
+      user: {
+        id: '10000000-0000-4000-8000-000000000001',
+        email: 'mira.okafor@example.test',
+        name: 'Mira Okafor',
+        isOperator: false,
+        createdAt: WORKSPACE.createdAt,
+      },
       memberships: [{ workspace: WORKSPACE, role: 'owner' }],
     });
     backend = TestBed.inject(HttpTestingController);

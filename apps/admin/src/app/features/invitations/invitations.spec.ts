@@ -8,7 +8,12 @@ import { Confirmation } from '@tumblewise/ui';
 import { of } from 'rxjs';
 import { Invitations } from './invitations';
 
-const WORKSPACE = { id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b', name: 'Harbour Street Gear Lab', state: 'active' as const, createdAt: '2026-11-02T09:00:00.000Z' };
+const WORKSPACE = {
+  id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b',
+  name: 'Harbour Street Gear Lab',
+  state: 'active' as const,
+  createdAt: '2026-11-02T09:00:00.000Z',
+};
 const URL = `/api/v1/workspaces/${WORKSPACE.id}/invitations`;
 
 function invitation(overrides: Partial<Invitation>): Invitation {
@@ -46,7 +51,13 @@ describe('Invitations', () => {
     TestBed.inject(AuthState).setSession({
       accessToken: 'token-one',
       expiresIn: 900,
-      user: { id: '10000000-0000-4000-8000-000000000001', email: 'mira.okafor@example.test', name: 'Mira Okafor', isOperator: false, createdAt: WORKSPACE.createdAt },
+      user: {
+        id: '10000000-0000-4000-8000-000000000001',
+        email: 'mira.okafor@example.test',
+        name: 'Mira Okafor',
+        isOperator: false,
+        createdAt: WORKSPACE.createdAt,
+      },
       memberships: [{ workspace: WORKSPACE, role: 'admin' }],
     });
     backend = TestBed.inject(HttpTestingController);
@@ -55,7 +66,12 @@ describe('Invitations', () => {
     fixture.detectChanges();
     backend.expectOne(URL).flush([
       invitation({}),
-      invitation({ id: '20000000-0000-4000-8000-000000000002', email: 'ana.b@example.test', delivery: 'not_sent', deliveryError: 'mail server unreachable' }),
+      invitation({
+        id: '20000000-0000-4000-8000-000000000002',
+        email: 'ana.b@example.test',
+        delivery: 'not_sent',
+        deliveryError: 'mail server unreachable',
+      }),
       invitation({ id: '20000000-0000-4000-8000-000000000003', email: 'old.friend@example.test', status: 'accepted' }),
     ]);
     await fixture.whenStable();
@@ -108,7 +124,10 @@ describe('Invitations', () => {
     await send();
     backend
       .expectOne((r) => r.method === 'POST' && r.url === URL)
-      .flush({ error: { code: 'already_invited', message: 'This address already has a pending invitation.' } }, { status: 409, statusText: 'Conflict' });
+      .flush(
+        { error: { code: 'already_invited', message: 'This address already has a pending invitation.' } },
+        { status: 409, statusText: 'Conflict' },
+      );
     await fixture.whenStable();
     expect(byTestId('invite-email-error')?.textContent?.trim()).toBe('This address already has a pending invitation.');
   });
@@ -118,7 +137,14 @@ describe('Invitations', () => {
     await send();
     const call = backend.expectOne((r) => r.method === 'POST' && r.url === URL);
     expect(call.request.body).toEqual({ email: 'kofi.lund@example.test', role: 'designer' });
-    call.flush(invitation({ id: '20000000-0000-4000-8000-000000000009', email: 'kofi.lund@example.test', delivery: 'not_sent', deliveryError: 'connection refused' }));
+    call.flush(
+      invitation({
+        id: '20000000-0000-4000-8000-000000000009',
+        email: 'kofi.lund@example.test',
+        delivery: 'not_sent',
+        deliveryError: 'connection refused',
+      }),
+    );
     await fixture.whenStable();
     expect(allText('invitation-email')[0]).toBe('kofi.lund@example.test');
     expect(byTestId('invite-notice')?.textContent).toContain('not sent (connection refused)');

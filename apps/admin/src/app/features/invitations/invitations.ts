@@ -142,7 +142,9 @@ export class Invitations {
         this.busyId.set(null);
         this.replace(updated);
         this.notice.set(
-          updated.delivery === 'sent' ? `Invitation re-sent to ${updated.email}.` : `Re-sending to ${updated.email} failed: ${deliveryLabel(updated)}.`,
+          updated.delivery === 'sent'
+            ? `Invitation re-sent to ${updated.email}.`
+            : `Re-sending to ${updated.email} failed: ${deliveryLabel(updated)}.`,
         );
       },
       error: (error: unknown) => {

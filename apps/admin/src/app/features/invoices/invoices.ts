@@ -13,15 +13,7 @@ import { INVOICE_STATUS_LABELS } from './invoice-status';
 @Component({
   selector: 'tw-invoices',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [
-    DatePipe,
-    RouterLink,
-    MatTableModule,
-    PageHeader,
-    EmptyState,
-    ErrorBanner,
-    LoadingState,
-  ],
+  imports: [DatePipe, RouterLink, MatTableModule, PageHeader, EmptyState, ErrorBanner, LoadingState],
   template: `
     <div class="tw-page">
       <tw-page-header heading="Invoices" [subtitle]="workspace.workspace()?.name ?? null" />
@@ -30,7 +22,12 @@ import { INVOICE_STATUS_LABELS } from './invoice-status';
       } @else if (loadError(); as message) {
         <tw-error-banner [message]="message" [retryable]="true" (retry)="reloadInvoices()" />
       } @else if (!invoices.value()?.length) {
-        <tw-empty-state icon="receipt_long" heading="No invoices yet" message="The first invoice appears here once a subscription is billed." data-testid="invoices-empty">
+        <tw-empty-state
+          icon="receipt_long"
+          heading="No invoices yet"
+          message="The first invoice appears here once a subscription is billed."
+          data-testid="invoices-empty"
+        >
           <a routerLink="/subscription">Go to Subscription</a>
         </tw-empty-state>
       } @else {
@@ -55,7 +52,13 @@ import { INVOICE_STATUS_LABELS } from './invoice-status';
             <ng-container matColumnDef="status">
               <th mat-header-cell *matHeaderCellDef>Status</th>
               <td mat-cell *matCellDef="let invoice">
-                <span class="tw-status" [class]="'tw-status-' + invoice.status" data-testid="invoice-status" [attr.data-status]="invoice.status">{{ statusLabel(invoice) }}</span>
+                <span
+                  class="tw-status"
+                  [class]="'tw-status-' + invoice.status"
+                  data-testid="invoice-status"
+                  [attr.data-status]="invoice.status"
+                  >{{ statusLabel(invoice) }}</span
+                >
               </td>
             </ng-container>
             <ng-container matColumnDef="document">

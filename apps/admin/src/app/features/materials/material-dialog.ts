@@ -1,7 +1,14 @@
 import { ChangeDetectionStrategy, Component, ElementRef, inject, signal } from '@angular/core';
 import { AbstractControl, NonNullableFormBuilder, ReactiveFormsModule, ValidationErrors } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
-import { MAT_DIALOG_DATA, MatDialogActions, MatDialogClose, MatDialogContent, MatDialogRef, MatDialogTitle } from '@angular/material/dialog';
+import {
+  MAT_DIALOG_DATA,
+  MatDialogActions,
+  MatDialogClose,
+  MatDialogContent,
+  MatDialogRef,
+  MatDialogTitle,
+} from '@angular/material/dialog';
 import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
@@ -76,7 +83,9 @@ function tolerancePercentValidator(control: AbstractControl): ValidationErrors |
           <mat-label>Density tolerance ±</mat-label>
           <input matInput type="number" formControlName="tolerancePercent" min="0" max="50" step="0.5" data-testid="material-tolerance" />
           <span matTextSuffix>%</span>
-          <mat-error data-testid="material-tolerance-error">{{ form.controls.tolerancePercent | fieldError: 'Density tolerance' }}</mat-error>
+          <mat-error data-testid="material-tolerance-error">{{
+            form.controls.tolerancePercent | fieldError: 'Density tolerance'
+          }}</mat-error>
         </mat-form-field>
         <mat-form-field appearance="outline">
           <mat-label>Source</mat-label>
@@ -134,7 +143,9 @@ export class MaterialDialog {
       source: value.source.trim(),
     };
     this.saving.set(true);
-    const save = this.data.material ? this.api.update(this.data.workspaceId, this.data.material.id, body) : this.api.create(this.data.workspaceId, body);
+    const save = this.data.material
+      ? this.api.update(this.data.workspaceId, this.data.material.id, body)
+      : this.api.create(this.data.workspaceId, body);
     save.subscribe({
       next: (material) => {
         this.saving.set(false);

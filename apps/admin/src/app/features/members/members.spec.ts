@@ -12,7 +12,12 @@ import { Confirmation } from '@tumblewise/ui';
 import { of } from 'rxjs';
 import { Members } from './members';
 
-const WORKSPACE = { id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b', name: 'Harbour Street Gear Lab', state: 'active' as const, createdAt: '2026-11-02T09:00:00.000Z' };
+const WORKSPACE = {
+  id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b',
+  name: 'Harbour Street Gear Lab',
+  state: 'active' as const,
+  createdAt: '2026-11-02T09:00:00.000Z',
+};
 const MEMBERS_URL = `/api/v1/workspaces/${WORKSPACE.id}/members`;
 
 function member(n: number, name: string, email: string, role: Role, joinedAt: string): Member {
@@ -144,7 +149,10 @@ describe('Members', () => {
     await selects[2].clickOptions({ text: 'Admin' });
     backend.expectOne(`${MEMBERS_URL}/${TEAM[0].id}`).flush({ ...TEAM[0], role: 'admin' });
     const me = backend.expectOne('/api/v1/me');
-    me.flush({ user: { id: TEAM[0].userId, email: TEAM[0].email, name: TEAM[0].name, isOperator: false, createdAt: WORKSPACE.createdAt }, memberships: [{ workspace: WORKSPACE, role: 'admin' }] });
+    me.flush({
+      user: { id: TEAM[0].userId, email: TEAM[0].email, name: TEAM[0].name, isOperator: false, createdAt: WORKSPACE.createdAt },
+      memberships: [{ workspace: WORKSPACE, role: 'admin' }],
+    });
     await fixture.whenStable();
     expect(TestBed.inject(AuthState).memberships()[0].role).toBe('admin');
   });

@@ -22,7 +22,9 @@ export class NoAccess {
   /** `workspace`: the page needs a role in the workspace; `operator`: it is for platform operators. */
   readonly kind = input<'workspace' | 'operator'>('workspace');
 
-  protected readonly heading = computed(() => (this.kind() === 'operator' ? 'This page is for platform operators' : 'These pages are for owners and admins'));
+  protected readonly heading = computed(() =>
+    this.kind() === 'operator' ? 'This page is for platform operators' : 'These pages are for owners and admins',
+  );
 
   /** Explains the user's role in the current workspace. */
   protected message(): string {

@@ -12,8 +12,15 @@ describe('toOperatorQuery', () => {
 
   it('maps the table columns to the server’s sort keys with the order', () => {
     expect(toOperatorQuery({ q: '', state: '' }, { active: 'created', direction: 'desc' })).toEqual({ sort: 'createdAt', order: 'desc' });
-    expect(toOperatorQuery({ q: '', state: '' }, { active: 'lastActivity', direction: 'asc' })).toEqual({ sort: 'lastActivityAt', order: 'asc' });
-    expect(toOperatorQuery({ q: '', state: 'past_due' }, { active: 'members', direction: 'asc' })).toEqual({ state: 'past_due', sort: 'members', order: 'asc' });
+    expect(toOperatorQuery({ q: '', state: '' }, { active: 'lastActivity', direction: 'asc' })).toEqual({
+      sort: 'lastActivityAt',
+      order: 'asc',
+    });
+    expect(toOperatorQuery({ q: '', state: 'past_due' }, { active: 'members', direction: 'asc' })).toEqual({
+      state: 'past_due',
+      sort: 'members',
+      order: 'asc',
+    });
   });
 
   it('never sends a column the server cannot sort by', () => {

@@ -9,8 +9,24 @@ import { RouterLink, RouterLinkActive } from '@angular/router';
   imports: [MatTabNav, MatTabLink, MatTabNavPanel, RouterLink, RouterLinkActive],
   template: `
     <nav mat-tab-nav-bar [tabPanel]="panel" aria-label="Platform pages">
-      <a mat-tab-link routerLink="/operator/workspaces" routerLinkActive #workspaces="routerLinkActive" [active]="workspaces.isActive" data-testid="operator-tab-workspaces">All workspaces</a>
-      <a mat-tab-link routerLink="/operator/health" routerLinkActive #health="routerLinkActive" [active]="health.isActive" data-testid="operator-tab-health">Platform health</a>
+      <a
+        mat-tab-link
+        routerLink="/operator/workspaces"
+        routerLinkActive
+        #workspaces="routerLinkActive"
+        [active]="workspaces.isActive"
+        data-testid="operator-tab-workspaces"
+        >All workspaces</a
+      >
+      <a
+        mat-tab-link
+        routerLink="/operator/health"
+        routerLinkActive
+        #health="routerLinkActive"
+        [active]="health.isActive"
+        data-testid="operator-tab-health"
+        >Platform health</a
+      >
     </nav>
     <mat-tab-nav-panel #panel><ng-content /></mat-tab-nav-panel>
   `,

@@ -94,7 +94,10 @@ export class OperatorWorkspaces {
   protected changeStanding(workspace: OperatorWorkspace, action: SuspensionDialogData['action']): void {
     this.notice.set(null);
     this.dialog
-      .open<SuspensionDialog, SuspensionDialogData, OperatorWorkspace>(SuspensionDialog, { data: { action, workspace }, autoFocus: 'first-tabbable' })
+      .open<SuspensionDialog, SuspensionDialogData, OperatorWorkspace>(SuspensionDialog, {
+        data: { action, workspace },
+        autoFocus: 'first-tabbable',
+      })
       .afterClosed()
       .subscribe((updated) => {
         if (!updated) return;

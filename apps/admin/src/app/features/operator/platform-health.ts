@@ -22,13 +22,28 @@ export interface HealthView {
 }
 
 const NAMES: Record<string, string> = {
-  database: 'Database', mail: 'Mail server', payment: 'Payment provider', workspacesByState: 'Workspaces by state', studies: 'Scatter studies in the queue',
-  process: 'Server process', uptimeSeconds: 'Uptime (s)', rssMegabytes: 'Memory (MB)', active: 'Active', past_due: 'Past due', read_only: 'Read-only',
-  suspended: 'Suspended', queued: 'Queued', running: 'Running',
+  database: 'Database',
+  mail: 'Mail server',
+  payment: 'Payment provider',
+  workspacesByState: 'Workspaces by state',
+  studies: 'Scatter studies in the queue',
+  process: 'Server process',
+  uptimeSeconds: 'Uptime (s)',
+  rssMegabytes: 'Memory (MB)',
+  active: 'Active',
+  past_due: 'Past due',
+  read_only: 'Read-only',
+  suspended: 'Suspended',
+  queued: 'Queued',
+  running: 'Running',
 };
 const nameOf = (key: string) => NAMES[key] ?? key;
 const isPlain = (value: unknown) => typeof value === 'string' || typeof value === 'number' || typeof value === 'boolean';
-const line = (key: string, value: unknown): HealthLine => ({ name: nameOf(key), value: String(value), up: value === 'up' ? true : value === 'down' ? false : null });
+const line = (key: string, value: unknown): HealthLine => ({
+  name: nameOf(key),
+  value: String(value),
+  up: value === 'up' ? true : value === 'down' ? false : null,
+});
 
 /**
  * Reads either health answer: the operator's (`services` plus groups of figures) or the public
@@ -42,9 +57,18 @@ export function healthView(health: Health): HealthView {
     .map(([key, value]) => line(key, value));
   const groups = Object.entries(health)
     .filter(([key, value]) => key !== 'services' && value && typeof value === 'object' && !Array.isArray(value) && key !== 'error')
-    .map(([key, value]) => ({ title: nameOf(key), lines: Object.entries(value as Record<string, unknown>).filter(([, v]) => isPlain(v)).map(([k, v]) => line(k, v)) }));
+    .map(([key, value]) => ({
+      title: nameOf(key),
+      lines: Object.entries(value as Record<string, unknown>)
+        .filter(([, v]) => isPlain(v))
+        .map(([k, v]) => line(k, v)),
+    }));
   const given = health.status;
-  const derived = serviceLines.some((l) => l.name === nameOf('database') && l.up === false) ? 'unavailable' : serviceLines.some((l) => l.up === false) ? 'degraded' : 'ok';
+  const derived = serviceLines.some((l) => l.name === nameOf('database') && l.up === false)
+    ? 'unavailable'
+    : serviceLines.some((l) => l.up === false)
+      ? 'degraded'
+      : 'ok';
   const status = given === 'ok' || given === 'degraded' || given === 'unavailable' ? given : derived;
   return { status, checkedAt: typeof health.checkedAt === 'string' ? health.checkedAt : null, services: serviceLines, groups };
 }
@@ -65,13 +89,17 @@ export function healthView(health: Health): HealthView {
         } @else if (view(); as h) {
           <p class="tw-overall" [class.tw-bad]="h.status !== 'ok'" data-testid="health-status" [attr.data-status]="h.status">
             <span class="material-icons" aria-hidden="true">{{ h.status === 'ok' ? 'check_circle' : 'warning' }}</span>
-            {{ h.status === 'ok' ? 'All services answer' : h.status === 'degraded' ? 'Degraded: some services do not answer' : 'Unavailable' }}
+            {{
+              h.status === 'ok' ? 'All services answer' : h.status === 'degraded' ? 'Degraded: some services do not answer' : 'Unavailable'
+            }}
           </p>
           <h2>Services</h2>
           <ul class="tw-services" aria-label="Services">
             @for (line of h.services; track line.name) {
               <li data-testid="health-service" [attr.data-up]="line.up">
-                <span class="material-icons" aria-hidden="true">{{ line.up === true ? 'check' : line.up === false ? 'close' : 'info' }}</span>
+                <span class="material-icons" aria-hidden="true">{{
+                  line.up === true ? 'check' : line.up === false ? 'close' : 'info'
+                }}</span>
                 <span class="tw-service-name">{{ line.name }}</span>
                 <span>{{ line.value }}</span>
               </li>
@@ -96,7 +124,9 @@ export function healthView(health: Health): HealthView {
             <p class="tw-muted">Checked {{ h.checkedAt | date: 'medium' }}</p>
           }
         }
-        <button mat-stroked-button type="button" (click)="recheck()" [disabled]="health.isLoading()" data-testid="health-recheck">Check again</button>
+        <button mat-stroked-button type="button" (click)="recheck()" [disabled]="health.isLoading()" data-testid="health-recheck">
+          Check again
+        </button>
       </tw-operator-tabs>
     </div>
   `,

@@ -1,7 +1,14 @@
 import { ChangeDetectionStrategy, Component, ElementRef, inject, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
-import { MAT_DIALOG_DATA, MatDialogActions, MatDialogClose, MatDialogContent, MatDialogRef, MatDialogTitle } from '@angular/material/dialog';
+import {
+  MAT_DIALOG_DATA,
+  MatDialogActions,
+  MatDialogClose,
+  MatDialogContent,
+  MatDialogRef,
+  MatDialogTitle,
+} from '@angular/material/dialog';
 import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { OperatorApi, toApiError } from '@tumblewise/api-client';
@@ -18,7 +25,21 @@ export interface SuspensionDialogData {
 @Component({
   selector: 'tw-suspension-dialog',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, MatDialogTitle, MatDialogContent, MatDialogActions, MatDialogClose, MatFormField, MatLabel, MatError, MatHint, MatInput, MatButton, ErrorBanner, FieldErrorPipe],
+  imports: [
+    ReactiveFormsModule,
+    MatDialogTitle,
+    MatDialogContent,
+    MatDialogActions,
+    MatDialogClose,
+    MatFormField,
+    MatLabel,
+    MatError,
+    MatHint,
+    MatInput,
+    MatButton,
+    ErrorBanner,
+    FieldErrorPipe,
+  ],
   template: `
     <h2 mat-dialog-title>{{ suspending ? 'Suspend' : 'Restore' }} {{ data.workspace.name }}?</h2>
     <form [formGroup]="form" (ngSubmit)="confirm()" novalidate aria-label="Reason">

@@ -42,7 +42,22 @@ const FIELD_ALIASES: Record<string, string> = {
 @Component({
   selector: 'tw-workspace-settings',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatError, MatHint, MatSuffix, MatInput, MatSelect, MatOption, MatButton, PageHeader, ErrorBanner, LoadingState, FieldErrorPipe],
+  imports: [
+    ReactiveFormsModule,
+    MatFormField,
+    MatLabel,
+    MatError,
+    MatHint,
+    MatSuffix,
+    MatInput,
+    MatSelect,
+    MatOption,
+    MatButton,
+    PageHeader,
+    ErrorBanner,
+    LoadingState,
+    FieldErrorPipe,
+  ],
   templateUrl: './workspace-settings.html',
   styleUrl: './workspace-settings.scss',
 })

@@ -7,7 +7,12 @@ import type { Billing, Role } from '@tumblewise/shared';
 import { Subscription } from './subscription';
 
 // Invented workspace, plan and figures.
-const WORKSPACE = { id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b', name: 'Harbour Street Gear Lab', state: 'active' as const, createdAt: '2026-11-02T09:00:00.000Z' };
+const WORKSPACE = {
+  id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b',
+  name: 'Harbour Street Gear Lab',
+  state: 'active' as const,
+  createdAt: '2026-11-02T09:00:00.000Z',
+};
 const URL = `/api/v1/workspaces/${WORKSPACE.id}/billing`;
 const PLAN = { id: 'crew', name: 'Crew', description: 'Per seat, monthly.', pricePerSeatMonthly: 1900, currency: 'eur', trialDays: 14 };
 
@@ -16,7 +21,12 @@ function billing(overrides: Partial<Billing> = {}): Billing {
     plans: [PLAN],
     plan: PLAN,
     seats: { bought: 5, members: 3, pendingInvitations: 1, available: 1, evaluationAllowance: false },
-    subscription: { status: 'trialing', cancelAtPeriodEnd: false, currentPeriodEnd: '2026-12-16T09:00:00.000Z', trialEndsAt: '2026-12-16T09:00:00.000Z' },
+    subscription: {
+      status: 'trialing',
+      cancelAtPeriodEnd: false,
+      currentPeriodEnd: '2026-12-16T09:00:00.000Z',
+      trialEndsAt: '2026-12-16T09:00:00.000Z',
+    },
     paymentMethod: { brand: 'visa', last4: '4242', expMonth: 12, expYear: 2030 },
     workspaceState: 'active',
     pastDueSince: null,
@@ -46,7 +56,13 @@ describe('Subscription', () => {
     TestBed.inject(AuthState).setSession({
       accessToken: 'token-one',
       expiresIn: 900,
-      user: { id: '10000000-0000-4000-8000-000000000001', email: 'mira.okafor@example.test', name: 'Mira Okafor', isOperator: false, createdAt: WORKSPACE.createdAt },
+      user: {
+        id: '10000000-0000-4000-8000-000000000001',
+        email: 'mira.okafor@example.test',
+        name: 'Mira Okafor',
+        isOperator: false,
+        createdAt: WORKSPACE.createdAt,
+      },
       memberships: [{ workspace: WORKSPACE, role }],
     });
     backend = TestBed.inject(HttpTestingController);
@@ -88,7 +104,9 @@ describe('Subscription', () => {
   it('refuses fewer seats than members plus pending invitations without asking the server', async () => {
     await open('owner', billing());
     await typeSeats('3');
-    expect(text('seats-error')).toBe('Seats must be at least 4: 3 members and 1 pending invitation hold seats. Remove members or revoke invitations first.');
+    expect(text('seats-error')).toBe(
+      'Seats must be at least 4: 3 members and 1 pending invitation hold seats. Remove members or revoke invitations first.',
+    );
     backend.expectNone(`${URL}/subscription`);
     await typeSeats('2.5');
     expect(text('seats-error')).toBe('Seats must be a whole number.');
@@ -109,11 +127,19 @@ describe('Subscription', () => {
   it('shows the server’s 409 beside the seats when an invitation took the seat meanwhile', async () => {
     await open('owner', billing());
     await typeSeats('4');
-    backend
-      .expectOne({ method: 'PATCH', url: `${URL}/subscription` })
-      .flush({ error: { code: 'seats_in_use', message: '5 seats are in use (3 members and 2 pending invitations); revoke invitations or remove members first.' } }, { status: 409, statusText: 'Conflict' });
+    backend.expectOne({ method: 'PATCH', url: `${URL}/subscription` }).flush(
+      {
+        error: {
+          code: 'seats_in_use',
+          message: '5 seats are in use (3 members and 2 pending invitations); revoke invitations or remove members first.',
+        },
+      },
+      { status: 409, statusText: 'Conflict' },
+    );
     await fixture.whenStable();
-    expect(text('seats-error')).toBe('5 seats are in use (3 members and 2 pending invitations); revoke invitations or remove members first.');
+    expect(text('seats-error')).toBe(
+      '5 seats are in use (3 members and 2 pending invitations); revoke invitations or remove members first.',
+    );
     expect(text('seats-summary')).toBe('4 of 5 seats in use');
   });
 
@@ -123,7 +149,11 @@ describe('Subscription', () => {
     const seats = byTestId('buy-seats') as HTMLInputElement;
     seats.value = '3';
     seats.dispatchEvent(new Event('input'));
-    for (const [id, value] of [['card-number', '4242 4242 4242 4242'], ['card-expiry', '12/40'], ['card-cvc', '123']]) {
+    for (const [id, value] of [
+      ['card-number', '4242 4242 4242 4242'],
+      ['card-expiry', '12/40'],
+      ['card-cvc', '123'],
+    ]) {
       const input = byTestId(id) as HTMLInputElement;
       input.value = value;
       input.dispatchEvent(new Event('input'));
@@ -140,7 +170,11 @@ describe('Subscription', () => {
 
   it('shows a declined card’s message and keeps the evaluation as it was', async () => {
     await open('owner', EVALUATION);
-    for (const [id, value] of [['card-number', '4000 0000 0000 0002'], ['card-expiry', '12/40'], ['card-cvc', '123']]) {
+    for (const [id, value] of [
+      ['card-number', '4000 0000 0000 0002'],
+      ['card-expiry', '12/40'],
+      ['card-cvc', '123'],
+    ]) {
       const input = byTestId(id) as HTMLInputElement;
       input.value = value;
       input.dispatchEvent(new Event('input'));
@@ -149,9 +183,14 @@ describe('Subscription', () => {
     await fixture.whenStable();
     const call = backend.expectOne({ method: 'POST', url: `${URL}/subscription` });
     expect(call.request.body.cardToken).toBe('tok_chargeDeclined');
-    call.flush({ error: { code: 'card_declined', message: 'The card was declined. Nothing was charged and nothing changed.' } }, { status: 402, statusText: 'Payment Required' });
+    call.flush(
+      { error: { code: 'card_declined', message: 'The card was declined. Nothing was charged and nothing changed.' } },
+      { status: 402, statusText: 'Payment Required' },
+    );
     await fixture.whenStable();
-    expect(host.querySelector('[data-testid="buy-panel"] [data-testid="error-banner"] p')?.textContent).toBe('The card was declined. Nothing was charged and nothing changed.');
+    expect(host.querySelector('[data-testid="buy-panel"] [data-testid="error-banner"] p')?.textContent).toBe(
+      'The card was declined. Nothing was charged and nothing changed.',
+    );
     expect(text('evaluation-allowance')).toContain('3 seats');
     expect(text('payment-method')).toBe('No card on file.');
   });
@@ -166,8 +205,15 @@ describe('Subscription', () => {
   });
 
   it('passes the billing state on to the shell’s banner', async () => {
-    await open('admin', billing({ workspaceState: 'past_due', pastDueSince: '2026-11-28T09:00:00.000Z', readOnlyFrom: '2026-12-12T09:00:00.000Z' }));
-    expect(TestBed.inject(WorkspaceStandings).current()).toEqual({ state: 'past_due', readOnlyFrom: '2026-12-12T09:00:00.000Z', suspendedReason: null });
+    await open(
+      'admin',
+      billing({ workspaceState: 'past_due', pastDueSince: '2026-11-28T09:00:00.000Z', readOnlyFrom: '2026-12-12T09:00:00.000Z' }),
+    );
+    expect(TestBed.inject(WorkspaceStandings).current()).toEqual({
+      state: 'past_due',
+      readOnlyFrom: '2026-12-12T09:00:00.000Z',
+      suspendedReason: null,
+    });
     expect(text('workspace-state')).toBe('Past due since Nov 28, 2026; read-only from Dec 12, 2026');
   });
 });

@@ -206,7 +206,9 @@ export class Subscription {
         this.replaceCardForm()?.reset();
         this.replacingCard.set(false);
         const card = billing.paymentMethod;
-        this.notice.set(card ? `Payment method changed to ${cardBrandLabel(card.brand)} ending in ${card.last4}.` : 'Payment method changed.');
+        this.notice.set(
+          card ? `Payment method changed to ${cardBrandLabel(card.brand)} ending in ${card.last4}.` : 'Payment method changed.',
+        );
       },
       error: (error: unknown) => {
         this.busy.set(null);

@@ -7,15 +7,40 @@ import type { InvitationPreview, Session } from '@tumblewise/shared';
 import { AcceptInvitation } from './accept-invitation';
 
 const TOKEN = 'inv_4f9c2d7e1a8b3c6d5e0f9a8b';
-const WORKSPACE = { id: '0a9b8c7d-6e5f-4a3b-9c2d-1e0f9a8b7c6d', name: 'Ridgeline Throwing Club', state: 'active' as const, createdAt: '2026-11-20T09:00:00.000Z' };
-const USER = { id: '9d8c7b6a-5f4e-4d3c-8b2a-190817263544', email: 'teo.vance@example.test', name: 'Teo Vance', isOperator: false, createdAt: '2026-12-01T09:00:00.000Z' };
+const WORKSPACE = {
+  id: '0a9b8c7d-6e5f-4a3b-9c2d-1e0f9a8b7c6d',
+  name: 'Ridgeline Throwing Club',
+  state: 'active' as const,
+  createdAt: '2026-11-20T09:00:00.000Z',
+};
+const USER = {
+  id: '9d8c7b6a-5f4e-4d3c-8b2a-190817263544',
+  email: 'teo.vance@example.test',
+  name: 'Teo Vance',
+  isOperator: false,
+  createdAt: '2026-12-01T09:00:00.000Z',
+};
 
 function preview(overrides: Partial<InvitationPreview> = {}): InvitationPreview {
-  return { workspaceName: 'Ridgeline Throwing Club', email: 'teo.vance@example.test', role: 'designer', invitedBy: 'Mira Okafor', accountExists: false, expiresAt: '2026-12-08T09:00:00.000Z', ...overrides };
+  return {
+    workspaceName: 'Ridgeline Throwing Club',
+    email: 'teo.vance@example.test',
+    role: 'designer',
+    invitedBy: 'Mira Okafor',
+    accountExists: false,
+    expiresAt: '2026-12-08T09:00:00.000Z',
+    ...overrides,
+  };
 }
 
 function joinedSession(token = 'token-joined'): Session {
-  return { accessToken: token, expiresIn: 900, user: USER, memberships: [{ workspace: WORKSPACE, role: 'designer' }], workspace: WORKSPACE };
+  return {
+    accessToken: token,
+    expiresIn: 900,
+    user: USER,
+    memberships: [{ workspace: WORKSPACE, role: 'designer' }],
+    workspace: WORKSPACE,
+  };
 }
 
 describe('AcceptInvitation', () => {
@@ -120,7 +145,10 @@ describe('AcceptInvitation', () => {
     await click('accept-submit');
     backend
       .expectOne('/api/v1/invitations/accept')
-      .flush({ error: { code: 'bad_input', message: 'Your name must not contain control characters.', field: 'name' } }, { status: 400, statusText: 'Bad Request' });
+      .flush(
+        { error: { code: 'bad_input', message: 'Your name must not contain control characters.', field: 'name' } },
+        { status: 400, statusText: 'Bad Request' },
+      );
     await fixture.whenStable();
     expect(byTestId('accept-name-error')?.textContent?.trim()).toBe('Your name must not contain control characters.');
   });
@@ -163,7 +191,10 @@ describe('AcceptInvitation', () => {
     await click('accept-signin-submit');
     backend
       .expectOne('/api/v1/auth/signin')
-      .flush({ error: { code: 'invalid_credentials', message: 'E-mail or password is wrong.' } }, { status: 401, statusText: 'Unauthorized' });
+      .flush(
+        { error: { code: 'invalid_credentials', message: 'E-mail or password is wrong.' } },
+        { status: 401, statusText: 'Unauthorized' },
+      );
     await fixture.whenStable();
     expect(host.querySelector('mat-error')?.textContent?.trim()).toBe('E-mail or password is wrong.');
     backend.expectNone('/api/v1/invitations/accept');

@@ -8,15 +8,7 @@ import { MatInput } from '@angular/material/input';
 import { Router, RouterLink } from '@angular/router';
 import { AuthApi, AuthState, InvitationsApi, toApiError, type ApiError } from '@tumblewise/api-client';
 import { passwordSchema, personNameSchema } from '@tumblewise/shared';
-import {
-  applyServerError,
-  ErrorBanner,
-  FieldErrorPipe,
-  focusFirstInvalid,
-  LoadingState,
-  ROLE_LABELS,
-  zodValidator,
-} from '@tumblewise/ui';
+import { applyServerError, ErrorBanner, FieldErrorPipe, focusFirstInvalid, LoadingState, ROLE_LABELS, zodValidator } from '@tumblewise/ui';
 import { switchMap } from 'rxjs';
 
 /** Which way the page offers to accept. */
@@ -30,7 +22,20 @@ export type AcceptMode = 'create-account' | 'sign-in' | 'signed-in';
 @Component({
   selector: 'tw-accept-invitation',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, RouterLink, DatePipe, MatFormField, MatLabel, MatError, MatHint, MatInput, MatButton, ErrorBanner, FieldErrorPipe, LoadingState],
+  imports: [
+    ReactiveFormsModule,
+    RouterLink,
+    DatePipe,
+    MatFormField,
+    MatLabel,
+    MatError,
+    MatHint,
+    MatInput,
+    MatButton,
+    ErrorBanner,
+    FieldErrorPipe,
+    LoadingState,
+  ],
   templateUrl: './accept-invitation.html',
   styleUrl: './accept-invitation.scss',
 })

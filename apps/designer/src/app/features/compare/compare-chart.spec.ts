@@ -21,7 +21,9 @@ describe('compareChartOptions', () => {
   });
 
   it('draws one figure with the baseline as a line', () => {
-    const o = compareChartOptions(comparison, 'mass') as { series: { data: { value: number }[]; markLine: { data: { yAxis: number }[] } }[] };
+    const o = compareChartOptions(comparison, 'mass') as {
+      series: { data: { value: number }[]; markLine: { data: { yAxis: number }[] } }[];
+    };
     expect(o.series[0].data.map((d) => d.value)).toEqual([250, 300]);
     expect(o.series[0].markLine.data[0].yAxis).toBe(300);
   });

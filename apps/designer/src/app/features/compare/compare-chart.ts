@@ -57,7 +57,17 @@ export function compareChartOptions(c: Comparison, figure: ChartFigure): ECharts
         name: row.label,
         type: 'bar',
         data: values.map((v, i) => ({ value: v, itemStyle: { color: SERIES_COLOURS[i % SERIES_COLOURS.length] } })),
-        ...(baseline !== null ? { markLine: { symbol: 'none', silent: true, lineStyle: { type: 'dashed', color: '#37474f' }, label: { formatter: 'baseline', color: CHART_TEXT.color }, data: [{ yAxis: baseline }] } } : {}),
+        ...(baseline !== null
+          ? {
+              markLine: {
+                symbol: 'none',
+                silent: true,
+                lineStyle: { type: 'dashed', color: '#37474f' },
+                label: { formatter: 'baseline', color: CHART_TEXT.color },
+                data: [{ yAxis: baseline }],
+              },
+            }
+          : {}),
       },
     ],
   };

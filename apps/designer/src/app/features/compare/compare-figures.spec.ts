@@ -24,10 +24,24 @@ describe('compare display units', () => {
   });
 
   it('writes a signed difference with its relative size', () => {
-    const row: ComparisonRow = { key: 'mass', label: 'Mass', unit: 'kg', values: [0.25, 0.3, 0.2], deltas: [0, 0.05, -0.05], relativeDeltas: [0, 0.2, -0.2] };
+    const row: ComparisonRow = {
+      key: 'mass',
+      label: 'Mass',
+      unit: 'kg',
+      values: [0.25, 0.3, 0.2],
+      deltas: [0, 0.05, -0.05],
+      relativeDeltas: [0, 0.2, -0.2],
+    };
     expect(formatDelta(row, 1)).toBe('+50 g (+20 %)');
     expect(formatDelta(row, 2)).toBe('−50 g (−20 %)');
-    const margin: ComparisonRow = { key: 'marginMajor', label: 'Margin', unit: '', values: [0.1, 0.15], deltas: [0, 0.05], relativeDeltas: [0, 0.5] };
+    const margin: ComparisonRow = {
+      key: 'marginMajor',
+      label: 'Margin',
+      unit: '',
+      values: [0.1, 0.15],
+      deltas: [0, 0.05],
+      relativeDeltas: [0, 0.5],
+    };
     expect(formatDelta(margin, 1)).toBe('+5 points (+50 %)');
     expect(formatDelta({ ...row, deltas: [null, null, null] }, 1)).toBe('');
   });

@@ -1,6 +1,6 @@
 import { provideHttpClient, withInterceptors } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { ComponentFixture, TestBed } from '@angular/core/testing';
+import { TestBed } from '@angular/core/testing';
 import { MATERIAL_ANIMATIONS } from '@angular/material/core';
 import { provideRouter, Router, withComponentInputBinding } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
@@ -10,18 +10,59 @@ import { Compare } from './compare';
 
 // Invented workspace, part and figures (UI logic under test, not physics: the reports are minimal
 // hand-written ones with round numbers so each expected cell can be read off).
-const WORKSPACE = { id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b', name: 'Harbour Street Gear Lab', state: 'active' as const, createdAt: '2026-11-02T09:00:00.000Z' };
+const WORKSPACE = {
+  id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b',
+  name: 'Harbour Street Gear Lab',
+  state: 'active' as const,
+  createdAt: '2026-11-02T09:00:00.000Z',
+};
 const BASE = `/api/v1/workspaces/${WORKSPACE.id}`;
 const PROJECT_ID = '40000000-0000-4000-8000-000000000001';
 const PART_ID = '50000000-0000-4000-8000-000000000001';
-const PROJECT: Project = { id: PROJECT_ID, name: 'Practice rackets', category: 'racket', notes: '', archived: false, createdAt: WORKSPACE.createdAt, updatedAt: WORKSPACE.createdAt };
-const PART = { id: PART_ID, projectId: PROJECT_ID, name: 'Practice racket', draft: null, draftVersion: 1, latestVariant: null, variantCount: 3, createdAt: WORKSPACE.createdAt, updatedAt: WORKSPACE.createdAt } as Part;
+const PROJECT: Project = {
+  id: PROJECT_ID,
+  name: 'Practice rackets',
+  category: 'racket',
+  notes: '',
+  archived: false,
+  createdAt: WORKSPACE.createdAt,
+  updatedAt: WORKSPACE.createdAt,
+};
+const PART = {
+  id: PART_ID,
+  projectId: PROJECT_ID,
+  name: 'Practice racket',
+  draft: null,
+  draftVersion: 1,
+  latestVariant: null,
+  variantCount: 3,
+  createdAt: WORKSPACE.createdAt,
+  updatedAt: WORKSPACE.createdAt,
+} as Part;
 const report = (mass: number, moments: [number, number, number], verdict: string) => ({
-  mass, principal: { moments }, spin: { verdict, nearestAxis: verdict === 'flip-prone' ? 'intermediate' : 'major', margins: { major: (moments[0] - moments[1]) / moments[1], minor: (moments[1] - moments[2]) / moments[1] } },
+  mass,
+  principal: { moments },
+  spin: {
+    verdict,
+    nearestAxis: verdict === 'flip-prone' ? 'intermediate' : 'major',
+    margins: { major: (moments[0] - moments[1]) / moments[1], minor: (moments[1] - moments[2]) / moments[1] },
+  },
   trade: { balancePoint: 0.3, swingweight: null, recoilWeight: null, twistweight: null },
 });
 const variant = (n: number, label: string, r: unknown, status: VariantStatus = 'draft'): Variant => ({
-  id: `60000000-0000-4000-8000-00000000000${n}`, partId: PART_ID, number: n, label, notes: '', document: {}, report: r, engineVersion: 'test', status, author: null, version: 1, createdAt: WORKSPACE.createdAt, updatedAt: WORKSPACE.createdAt,
+  id: `60000000-0000-4000-8000-00000000000${n}`,
+  partId: PART_ID,
+  number: n,
+  label,
+  notes: '',
+  document: {},
+  report: r,
+  engineVersion: 'test',
+  status,
+  author: null,
+  version: 1,
+  createdAt: WORKSPACE.createdAt,
+  updatedAt: WORKSPACE.createdAt,
 });
 const V1 = variant(1, 'first cut', report(0.25, [2e-3, 1.5e-3, 1e-4], 'flip-prone'), 'changes_requested');
 const V2 = variant(2, 'longer throat', report(0.3, [2.5e-3, 1.5e-3, 1e-4], 'steady'));
@@ -46,15 +87,33 @@ describe('Compare', () => {
         provideHttpClient(withInterceptors([authInterceptor, errorInterceptor])),
         provideHttpClientTesting(),
         { provide: MATERIAL_ANIMATIONS, useValue: { animationsDisabled: true } },
-        { provide: DOWNLOAD_FETCH, useValue: (url: string, init?: RequestInit) => { fetches.push({ url, init }); return fetchAnswer(); } },
+        {
+          provide: DOWNLOAD_FETCH,
+          useValue: (url: string, init?: RequestInit) => {
+            fetches.push({ url, init });
+            return fetchAnswer();
+          },
+        },
       ],
     });
     TestBed.inject(AuthState).setSession({
-      accessToken: 'token-one', expiresIn: 900, memberships: [{ workspace: WORKSPACE, role: 'reviewer' }],
-      user: { id: '10000000-0000-4000-8000-000000000001', email: 'mira@example.test', name: 'Mira Okafor', isOperator: false, createdAt: WORKSPACE.createdAt },
+      accessToken: 'token-one',
+      expiresIn: 900,
+      memberships: [{ workspace: WORKSPACE, role: 'reviewer' }],
+      user: {
+        id: '10000000-0000-4000-8000-000000000001',
+        email: 'mira@example.test',
+        name: 'Mira Okafor',
+        isOperator: false,
+        createdAt: WORKSPACE.createdAt,
+      },
     });
     backend = TestBed.inject(HttpTestingController);
-    (globalThis as { ResizeObserver?: unknown }).ResizeObserver = class { observe() {} unobserve() {} disconnect() {} };
+    (globalThis as { ResizeObserver?: unknown }).ResizeObserver = class {
+      observe() {}
+      unobserve() {}
+      disconnect() {}
+    };
     harness = await RouterTestingHarness.create();
     await harness.navigateByUrl(`/projects/${PROJECT_ID}/parts/${PART_ID}/compare${query}`);
     TestBed.tick();
@@ -72,14 +131,23 @@ describe('Compare', () => {
 
   const testId = (id: string) => host.querySelector<HTMLElement>(`[data-testid="${id}"]`);
   const cells = (key: string) =>
-    Array.from(host.querySelectorAll(`[data-testid="compare-row-${key}"] td`)).map((td) => Array.from(td.querySelectorAll('span')).map((s) => s.textContent!.trim()).join(' '));
+    Array.from(host.querySelectorAll(`[data-testid="compare-row-${key}"] td`)).map((td) =>
+      Array.from(td.querySelectorAll('span'))
+        .map((s) => s.textContent!.trim())
+        .join(' '),
+    );
 
   it('compares the variants of the address against its baseline, in display units', async () => {
     await open(`?variants=${V1.id},${V2.id}&baseline=${V1.id}`);
     // Where the page sits, the project and part by name.
-    expect(Array.from(host.querySelectorAll('nav[aria-label="Breadcrumb"] a, nav[aria-label="Breadcrumb"] [aria-current]')).map((e) => e.textContent!.trim()))
-      .toEqual(['Projects', 'Practice rackets', PART.name, 'Compare variants']);
-    const headers = Array.from(host.querySelectorAll('[data-testid="compare-column"]')).map((th) => th.textContent!.replace(/\s+/g, ' ').trim());
+    expect(
+      Array.from(host.querySelectorAll('nav[aria-label="Breadcrumb"] a, nav[aria-label="Breadcrumb"] [aria-current]')).map((e) =>
+        e.textContent!.trim(),
+      ),
+    ).toEqual(['Projects', 'Practice rackets', PART.name, 'Compare variants']);
+    const headers = Array.from(host.querySelectorAll('[data-testid="compare-column"]')).map((th) =>
+      th.textContent!.replace(/\s+/g, ' ').trim(),
+    );
     expect(headers).toEqual(['v1 first cut baselinepicture_as_pdf PDF', 'v2 longer throat picture_as_pdf PDF']);
     expect(cells('mass')).toEqual(['250 g', '300 g +50 g (+20 %)']);
     // 2.5e-3 kg·m² = 25,000 g·cm²; +0.5e-3 kg·m² = +5,000 g·cm² = +25 %.
@@ -121,7 +189,9 @@ describe('Compare', () => {
     const saved: string[] = [];
     URL.createObjectURL = jest.fn(() => 'blob:compare');
     URL.revokeObjectURL = jest.fn();
-    const click = jest.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(function (this: HTMLAnchorElement) { saved.push(this.download); });
+    const click = jest.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(function (this: HTMLAnchorElement) {
+      saved.push(this.download);
+    });
     testId('compare-csv')!.click();
     await harness.fixture.whenStable();
     await new Promise((r) => setTimeout(r, 0));
@@ -134,11 +204,14 @@ describe('Compare', () => {
 
   it('downloads one variant’s spin report as PDF', async () => {
     await open(`?variants=${V1.id},${V2.id}`);
-    fetchAnswer = async () => ({ ok: true, status: 200, blob: async () => new Blob(['%PDF-1.7'], { type: 'application/pdf' }) }) as Response;
+    fetchAnswer = async () =>
+      ({ ok: true, status: 200, blob: async () => new Blob(['%PDF-1.7'], { type: 'application/pdf' }) }) as Response;
     const saved: string[] = [];
     URL.createObjectURL = jest.fn(() => 'blob:pdf');
     URL.revokeObjectURL = jest.fn();
-    const click = jest.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(function (this: HTMLAnchorElement) { saved.push(this.download); });
+    const click = jest.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(function (this: HTMLAnchorElement) {
+      saved.push(this.download);
+    });
     testId('compare-pdf-1')!.click();
     await new Promise((r) => setTimeout(r, 0));
     await harness.fixture.whenStable();
@@ -149,7 +222,12 @@ describe('Compare', () => {
 
   it('shows the server’s message when the CSV cannot be made', async () => {
     await open(`?variants=${V1.id},${V2.id}`);
-    fetchAnswer = async () => ({ ok: false, status: 404, text: async () => JSON.stringify({ error: { code: 'not_found', message: 'One of the variants was not found.' } }) }) as Response;
+    fetchAnswer = async () =>
+      ({
+        ok: false,
+        status: 404,
+        text: async () => JSON.stringify({ error: { code: 'not_found', message: 'One of the variants was not found.' } }),
+      }) as Response;
     testId('compare-csv')!.click();
     await new Promise((r) => setTimeout(r, 0));
     await harness.fixture.whenStable();

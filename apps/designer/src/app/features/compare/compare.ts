@@ -6,7 +6,7 @@ import { MatRadioButton, MatRadioGroup } from '@angular/material/radio';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
 import { API_BASE_URL, FileDownloads, toApiError, WorkspaceContext } from '@tumblewise/api-client';
-import { buildComparison, type Comparison, type Variant } from '@tumblewise/shared';
+import { buildComparison, type Comparison } from '@tumblewise/shared';
 import { EmptyState, ErrorBanner, LoadingState, PageHeader, StatusChip } from '@tumblewise/ui';
 import { provideCharts } from '@tumblewise/viewer';
 import { NgxEchartsDirective } from 'ngx-echarts';
@@ -73,7 +73,9 @@ export class Compare {
   /** The part and its variants (the compared ones live in `?variants=`, not `?variant=`). */
   private readonly page = partPage({ projectId: this.projectId, partId: this.partId });
   protected readonly part = this.page.part;
-  protected readonly crumbs = computed(() => partTrail(this.projectId(), this.page.project.value()?.name, this.partId(), this.part.value()?.name, 'Compare variants'));
+  protected readonly crumbs = computed(() =>
+    partTrail(this.projectId(), this.page.project.value()?.name, this.partId(), this.part.value()?.name, 'Compare variants'),
+  );
   protected readonly allVariants = this.page.variants;
   protected readonly loadError = this.page.loadError;
   protected readonly list = this.page.list;
@@ -81,7 +83,10 @@ export class Compare {
   /** The chosen ids, in the order of the part's variants: from the address, else the newest two. */
   protected readonly selectedIds = linkedSignal<string[]>(() => {
     const all = this.list();
-    const asked = (this.variants() ?? '').split(',').map((s) => s.trim()).filter(Boolean);
+    const asked = (this.variants() ?? '')
+      .split(',')
+      .map((s) => s.trim())
+      .filter(Boolean);
     const known = all.filter((v) => asked.includes(v.id)).map((v) => v.id);
     if (asked.length) return known.slice(0, COMPARE_LIMITS.max);
     return all.slice(-2).map((v) => v.id);
@@ -89,7 +94,12 @@ export class Compare {
   /** Ids in the address that name no variant of this part. */
   protected readonly unknownIds = computed(() => {
     const all = new Set(this.list().map((v) => v.id));
-    return this.allVariants.hasValue() ? (this.variants() ?? '').split(',').map((s) => s.trim()).filter((id) => id && !all.has(id)) : [];
+    return this.allVariants.hasValue()
+      ? (this.variants() ?? '')
+          .split(',')
+          .map((s) => s.trim())
+          .filter((id) => id && !all.has(id))
+      : [];
   });
   protected readonly baselineId = linkedSignal<string | null>(() => {
     const ids = this.selectedIds();
@@ -103,7 +113,10 @@ export class Compare {
   protected readonly comparison = computed<Comparison | null>(() => {
     const chosen = this.selected();
     if (chosen.length < COMPARE_LIMITS.min || chosen.length > COMPARE_LIMITS.max) return null;
-    return buildComparison(chosen.map((v) => ({ id: v.id, label: variantLabel(v), report: v.report })), this.baselineId() ?? undefined);
+    return buildComparison(
+      chosen.map((v) => ({ id: v.id, label: variantLabel(v), report: v.report })),
+      this.baselineId() ?? undefined,
+    );
   });
 
   protected readonly figure = signal<ChartFigure>('moments');
@@ -154,7 +167,10 @@ export class Compare {
     const query = new URLSearchParams({ variants: c.variants.map((v) => v.id).join(','), baseline: c.variants[c.baselineIndex].id });
     const name = `${this.part.hasValue() ? this.part.value().name : 'part'} comparison`.replace(/[^A-Za-z0-9._-]+/g, '-');
     try {
-      await this.downloads.downloadFile(`${this.apiBase}/workspaces/${encodeURIComponent(workspaceId)}/compare.csv?${query.toString().replace(/%2C/g, ',')}`, `${name}.csv`);
+      await this.downloads.downloadFile(
+        `${this.apiBase}/workspaces/${encodeURIComponent(workspaceId)}/compare.csv?${query.toString().replace(/%2C/g, ',')}`,
+        `${name}.csv`,
+      );
     } catch (error) {
       this.downloadError.set(`The CSV could not be downloaded: ${toApiError(error).message}`);
     } finally {
@@ -170,7 +186,10 @@ export class Compare {
     this.downloading.set(true);
     const name = `${this.part.hasValue() ? this.part.value().name : 'part'} ${label} spin report`.replace(/[^A-Za-z0-9._-]+/g, '-');
     try {
-      await this.downloads.downloadFile(`${this.apiBase}/workspaces/${encodeURIComponent(workspaceId)}/variants/${encodeURIComponent(variantId)}/export.pdf`, `${name}.pdf`);
+      await this.downloads.downloadFile(
+        `${this.apiBase}/workspaces/${encodeURIComponent(workspaceId)}/variants/${encodeURIComponent(variantId)}/export.pdf`,
+        `${name}.pdf`,
+      );
     } catch (error) {
       this.downloadError.set(`The PDF could not be downloaded: ${toApiError(error).message}`);
     } finally {

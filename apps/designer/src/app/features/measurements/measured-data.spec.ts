@@ -11,25 +11,97 @@ import type { Measurement, Part, Project, Role, Variant, WorkspaceSettings } fro
 import { MeasuredData } from './measured-data';
 
 // Invented workspace, part, variants and rig readings.
-const WORKSPACE = { id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b', name: 'Harbour Street Gear Lab', state: 'active' as const, createdAt: '2026-11-02T09:00:00.000Z' };
+const WORKSPACE = {
+  id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b',
+  name: 'Harbour Street Gear Lab',
+  state: 'active' as const,
+  createdAt: '2026-11-02T09:00:00.000Z',
+};
 const BASE = `/api/v1/workspaces/${WORKSPACE.id}`;
 const PROJECT_ID = '40000000-0000-4000-8000-000000000001';
 const PART_ID = '50000000-0000-4000-8000-000000000001';
-const PROJECT: Project = { id: PROJECT_ID, name: 'Practice batons', category: 'juggling', notes: '', archived: false, createdAt: WORKSPACE.createdAt, updatedAt: WORKSPACE.createdAt };
-const PART = { id: PART_ID, projectId: PROJECT_ID, name: 'Practice baton', draft: null, draftVersion: 1, latestVariant: null, variantCount: 2, createdAt: WORKSPACE.createdAt, updatedAt: WORKSPACE.createdAt } as Part;
+const PROJECT: Project = {
+  id: PROJECT_ID,
+  name: 'Practice batons',
+  category: 'juggling',
+  notes: '',
+  archived: false,
+  createdAt: WORKSPACE.createdAt,
+  updatedAt: WORKSPACE.createdAt,
+};
+const PART = {
+  id: PART_ID,
+  projectId: PROJECT_ID,
+  name: 'Practice baton',
+  draft: null,
+  draftVersion: 1,
+  latestVariant: null,
+  variantCount: 2,
+  createdAt: WORKSPACE.createdAt,
+  updatedAt: WORKSPACE.createdAt,
+} as Part;
 const variant = (n: number, label: string): Variant => ({
-  id: `60000000-0000-4000-8000-00000000000${n}`, partId: PART_ID, number: n, label, notes: '', document: {}, report: {}, engineVersion: 'test', status: 'draft',
-  author: null, version: 1, createdAt: WORKSPACE.createdAt, updatedAt: WORKSPACE.createdAt,
+  id: `60000000-0000-4000-8000-00000000000${n}`,
+  partId: PART_ID,
+  number: n,
+  label,
+  notes: '',
+  document: {},
+  report: {},
+  engineVersion: 'test',
+  status: 'draft',
+  author: null,
+  version: 1,
+  createdAt: WORKSPACE.createdAt,
+  updatedAt: WORKSPACE.createdAt,
 });
 const V1 = variant(1, 'first cut');
 const V2 = variant(2, 'heavier knob');
-const SETTINGS: WorkspaceSettings = { id: WORKSPACE.id, name: WORKSPACE.name, displayUnits: { length: 'mm', mass: 'g', inertia: 'kg·cm²' }, defaultTolerances: { density: 0.05, size: 0.0002 } };
+const SETTINGS: WorkspaceSettings = {
+  id: WORKSPACE.id,
+  name: WORKSPACE.name,
+  displayUnits: { length: 'mm', mass: 'g', inertia: 'kg·cm²' },
+  defaultTolerances: { density: 0.05, size: 0.0002 },
+};
 const IMPORT_A = '80000000-0000-4000-8000-00000000000a';
 const IMPORT_B = '80000000-0000-4000-8000-00000000000b';
 // 0.0024 kg·m² = 24 kg·cm² (SI prefixes); the difference is the server's, (measured − predicted) / predicted.
-const MAJOR: Measurement = { id: '70000000-0000-4000-8000-000000000001', axis: 'major', value: 0.002472, enteredValue: 24720, enteredUnit: 'g·cm²', method: 'compound pendulum', predicted: 0.0024, differencePercent: 3, importId: IMPORT_A, createdAt: '2026-11-30T10:00:00.000Z' };
-const SWING: Measurement = { id: '70000000-0000-4000-8000-000000000002', axis: 'swing', value: 0.0186, enteredValue: 186, enteredUnit: 'kg·cm²', method: 'swing rig', predicted: 0.02, differencePercent: -7, importId: null, createdAt: '2026-11-30T10:01:00.000Z' };
-const OTHER: Measurement = { id: '70000000-0000-4000-8000-000000000003', axis: 'end-over-end (rig B)', value: 0.0123, enteredValue: 0.0123, enteredUnit: 'kg·m²', method: 'trifilar pendulum', predicted: null, differencePercent: null, importId: IMPORT_B, createdAt: '2026-11-30T11:00:00.000Z' };
+const MAJOR: Measurement = {
+  id: '70000000-0000-4000-8000-000000000001',
+  axis: 'major',
+  value: 0.002472,
+  enteredValue: 24720,
+  enteredUnit: 'g·cm²',
+  method: 'compound pendulum',
+  predicted: 0.0024,
+  differencePercent: 3,
+  importId: IMPORT_A,
+  createdAt: '2026-11-30T10:00:00.000Z',
+};
+const SWING: Measurement = {
+  id: '70000000-0000-4000-8000-000000000002',
+  axis: 'swing',
+  value: 0.0186,
+  enteredValue: 186,
+  enteredUnit: 'kg·cm²',
+  method: 'swing rig',
+  predicted: 0.02,
+  differencePercent: -7,
+  importId: null,
+  createdAt: '2026-11-30T10:01:00.000Z',
+};
+const OTHER: Measurement = {
+  id: '70000000-0000-4000-8000-000000000003',
+  axis: 'end-over-end (rig B)',
+  value: 0.0123,
+  enteredValue: 0.0123,
+  enteredUnit: 'kg·m²',
+  method: 'trifilar pendulum',
+  predicted: null,
+  differencePercent: null,
+  importId: IMPORT_B,
+  createdAt: '2026-11-30T11:00:00.000Z',
+};
 
 /** Runs effects and lets pending microtasks and timers settle; unlike whenStable it does not wait for open requests. */
 async function settle(): Promise<void> {
@@ -46,7 +118,12 @@ describe('MeasuredData', () => {
   let asked: ConfirmRequest[];
   let answer: boolean;
 
-  async function open(role: Role = 'designer', query = `?variant=${V1.id}`, readings: Measurement[] = [MAJOR, SWING], readFor = V1): Promise<void> {
+  async function open(
+    role: Role = 'designer',
+    query = `?variant=${V1.id}`,
+    readings: Measurement[] = [MAJOR, SWING],
+    readFor = V1,
+  ): Promise<void> {
     localStorage.clear();
     TestBed.configureTestingModule({
       providers: [
@@ -60,8 +137,16 @@ describe('MeasuredData', () => {
     asked = [];
     answer = true;
     TestBed.inject(AuthState).setSession({
-      accessToken: 'token-one', expiresIn: 900, memberships: [{ workspace: WORKSPACE, role }],
-      user: { id: '10000000-0000-4000-8000-000000000001', email: 'mira@example.test', name: 'Mira Okafor', isOperator: false, createdAt: WORKSPACE.createdAt },
+      accessToken: 'token-one',
+      expiresIn: 900,
+      memberships: [{ workspace: WORKSPACE, role }],
+      user: {
+        id: '10000000-0000-4000-8000-000000000001',
+        email: 'mira@example.test',
+        name: 'Mira Okafor',
+        isOperator: false,
+        createdAt: WORKSPACE.createdAt,
+      },
     });
     backend = TestBed.inject(HttpTestingController);
     harness = await RouterTestingHarness.create();
@@ -112,13 +197,25 @@ describe('MeasuredData', () => {
     const table = testId('measurements-table')!;
     expect(table.querySelector('caption')!.textContent).toContain('v1 first cut');
     expect(Array.from(table.querySelectorAll('thead th[scope="col"]')).map(text)).toEqual([
-      'Axis', 'Measured, as entered', 'Measured (kg·cm²)', 'Predicted (kg·cm²)', 'Difference', 'Method', 'Recorded', 'Remove',
+      'Axis',
+      'Measured, as entered',
+      'Measured (kg·cm²)',
+      'Predicted (kg·cm²)',
+      'Difference',
+      'Method',
+      'Recorded',
+      'Remove',
     ]);
     expect(testId('measurement-remove', major)!.getAttribute('aria-label')).toBe('Remove the reading major, 24,720 g·cm²');
     expect(major.querySelector('th[scope="row"]')).not.toBeNull();
     expect(text(testId('measurements-estimates'))).toContain('Measured and predicted values are both estimates');
     const crumbs = host.querySelector('nav[aria-label="Breadcrumb"]')!;
-    expect(Array.from(crumbs.querySelectorAll('a, [aria-current]')).map(text)).toEqual(['Projects', 'Practice batons', 'Practice baton', 'Measured data']);
+    expect(Array.from(crumbs.querySelectorAll('a, [aria-current]')).map(text)).toEqual([
+      'Projects',
+      'Practice batons',
+      'Practice baton',
+      'Measured data',
+    ]);
     expect(crumbs.querySelector('[aria-current="page"]')!.textContent).toBe('Measured data');
   });
 
@@ -175,7 +272,9 @@ describe('MeasuredData', () => {
     post.flush(
       {
         error: {
-          code: 'invalid_input', field: 'file', message: 'The CSV was not imported: (see problems).',
+          code: 'invalid_input',
+          field: 'file',
+          message: 'The CSV was not imported: (see problems).',
           problems: [
             { line: 2, message: 'value "-3" must be a positive number' },
             { line: 3, message: 'axis must be 1–120 characters' },
@@ -204,7 +303,9 @@ describe('MeasuredData', () => {
   it('imports a good file, says how many rows came in, and reloads the table with them marked', async () => {
     await open();
     await pick(csv('axis,value,unit,method\nend-over-end (rig B),0.0123,kg·m²,trifilar pendulum\n', 'rig-b.csv'));
-    backend.expectOne((r) => r.method === 'POST' && r.url === `${BASE}/variants/${V1.id}/measurements`).flush([OTHER], { status: 201, statusText: 'Created' });
+    backend
+      .expectOne((r) => r.method === 'POST' && r.url === `${BASE}/variants/${V1.id}/measurements`)
+      .flush([OTHER], { status: 201, statusText: 'Created' });
     await settle();
     backend.expectOne((r) => r.method === 'GET' && r.url === `${BASE}/variants/${V1.id}/measurements`).flush([MAJOR, SWING, OTHER]);
     await harness.fixture.whenStable();
@@ -221,9 +322,16 @@ describe('MeasuredData', () => {
     expect(text(testId('error-banner'))).toContain('“frame.json” is not a CSV file');
     backend.expectNone(`${BASE}/variants/${V1.id}/measurements`);
     await pick(csv('axis,value,unit,method\nmajor,1,kg·m²,rig\n'));
-    backend.expectOne((r) => r.method === 'POST').flush({ error: { code: 'forbidden', message: 'Your role in this workspace does not allow this.' } }, { status: 403, statusText: 'Forbidden' });
+    backend
+      .expectOne((r) => r.method === 'POST')
+      .flush(
+        { error: { code: 'forbidden', message: 'Your role in this workspace does not allow this.' } },
+        { status: 403, statusText: 'Forbidden' },
+      );
     await harness.fixture.whenStable();
-    expect(text(testId('error-banner')!.querySelector('p'))).toBe('“rig.csv” was not imported: Your role in this workspace does not allow this.');
+    expect(text(testId('error-banner')!.querySelector('p'))).toBe(
+      '“rig.csv” was not imported: Your role in this workspace does not allow this.',
+    );
     expect(testId('measurements-problems')).toBeNull();
   });
 
@@ -262,7 +370,9 @@ describe('MeasuredData', () => {
     await open();
     testId('measurement-remove', row('major'))!.click();
     await settle();
-    backend.expectOne(`${BASE}/variants/${V1.id}/measurements/${MAJOR.id}`).flush({ error: { code: 'not_found', message: 'Measurement was not found.' } }, { status: 404, statusText: 'Not Found' });
+    backend
+      .expectOne(`${BASE}/variants/${V1.id}/measurements/${MAJOR.id}`)
+      .flush({ error: { code: 'not_found', message: 'Measurement was not found.' } }, { status: 404, statusText: 'Not Found' });
     await settle();
     backend.expectOne((r) => r.method === 'GET').flush([SWING]);
     await harness.fixture.whenStable();
@@ -273,7 +383,12 @@ describe('MeasuredData', () => {
   it('undoes an import after confirming how many rows it removes', async () => {
     await open();
     const second: Measurement = { ...OTHER, id: '70000000-0000-4000-8000-000000000004', axis: 'minor' };
-    await pick(csv('axis,value,unit,method\nend-over-end (rig B),0.0123,kg·m²,trifilar pendulum\nminor,0.0123,kg·m²,trifilar pendulum\n', 'rig-b.csv'));
+    await pick(
+      csv(
+        'axis,value,unit,method\nend-over-end (rig B),0.0123,kg·m²,trifilar pendulum\nminor,0.0123,kg·m²,trifilar pendulum\n',
+        'rig-b.csv',
+      ),
+    );
     backend.expectOne((r) => r.method === 'POST').flush([OTHER, second], { status: 201, statusText: 'Created' });
     await settle();
     backend.expectOne((r) => r.method === 'GET').flush([MAJOR, SWING, OTHER, second]);
@@ -317,8 +432,16 @@ describe('MeasuredData', () => {
       ],
     });
     TestBed.inject(AuthState).setSession({
-      accessToken: 'token-one', expiresIn: 900, memberships: [{ workspace: WORKSPACE, role: 'designer' }],
-      user: { id: '10000000-0000-4000-8000-000000000001', email: 'mira@example.test', name: 'Mira Okafor', isOperator: false, createdAt: WORKSPACE.createdAt },
+      accessToken: 'token-one',
+      expiresIn: 900,
+      memberships: [{ workspace: WORKSPACE, role: 'designer' }],
+      user: {
+        id: '10000000-0000-4000-8000-000000000001',
+        email: 'mira@example.test',
+        name: 'Mira Okafor',
+        isOperator: false,
+        createdAt: WORKSPACE.createdAt,
+      },
     });
     backend = TestBed.inject(HttpTestingController);
     harness = await RouterTestingHarness.create();
@@ -327,7 +450,9 @@ describe('MeasuredData', () => {
     backend.expectOne(`${BASE}/projects/${PROJECT_ID}`).flush(PROJECT);
     backend.expectOne(`${BASE}/parts/${PART_ID}`).flush(PART);
     backend.expectOne(`${BASE}/parts/${PART_ID}/variants`).flush([V1, V2]);
-    backend.expectOne(`${BASE}/settings`).flush({ error: { code: 'server_error', message: 'boom' } }, { status: 500, statusText: 'Server Error' });
+    backend
+      .expectOne(`${BASE}/settings`)
+      .flush({ error: { code: 'server_error', message: 'boom' } }, { status: 500, statusText: 'Server Error' });
     await harness.fixture.whenStable();
     host = harness.routeNativeElement!;
     expect(text(testId('measurements-unknown-variant'))).toContain('not one of this part');

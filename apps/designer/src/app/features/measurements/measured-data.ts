@@ -1,5 +1,17 @@
 import { NgTemplateOutlet } from '@angular/common';
-import { ChangeDetectionStrategy, Component, computed, DestroyRef, effect, type ElementRef, inject, input, signal, untracked, viewChild } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  DestroyRef,
+  effect,
+  type ElementRef,
+  inject,
+  input,
+  signal,
+  untracked,
+  viewChild,
+} from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { MatButton, MatIconButton } from '@angular/material/button';
 import { MatFormField, MatLabel } from '@angular/material/form-field';
@@ -39,7 +51,22 @@ const FALLBACK_UNIT: InertiaUnit = 'g·cm²';
 @Component({
   selector: 'tw-measured-data',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [NgTemplateOutlet, MatButton, MatIconButton, MatTooltip, MatFormField, MatLabel, MatInput, MatProgressBar, PageHeader, Breadcrumbs, StatusChip, EmptyState, ErrorBanner, LoadingState],
+  imports: [
+    NgTemplateOutlet,
+    MatButton,
+    MatIconButton,
+    MatTooltip,
+    MatFormField,
+    MatLabel,
+    MatInput,
+    MatProgressBar,
+    PageHeader,
+    Breadcrumbs,
+    StatusChip,
+    EmptyState,
+    ErrorBanner,
+    LoadingState,
+  ],
   templateUrl: './measured-data.html',
   styleUrl: './measured-data.scss',
 })
@@ -71,14 +98,21 @@ export class MeasuredData {
   private readonly page = partPage({ projectId: this.projectId, partId: this.partId, variant: this.variant });
   protected readonly project = this.page.project;
   protected readonly part = this.page.part;
-  protected readonly crumbs = computed(() => partTrail(this.projectId(), this.project.value()?.name, this.partId(), this.part.value()?.name, 'Measured data'));
+  protected readonly crumbs = computed(() =>
+    partTrail(this.projectId(), this.project.value()?.name, this.partId(), this.part.value()?.name, 'Measured data'),
+  );
   protected readonly variants = this.page.variants;
   protected readonly list = this.page.list;
   protected readonly chosen = this.page.chosen;
-  private readonly settings = rxResource({ params: () => this.workspace.workspaceId() ?? undefined, stream: ({ params }) => this.settingsApi.get(params) });
+  private readonly settings = rxResource({
+    params: () => this.workspace.workspaceId() ?? undefined,
+    stream: ({ params }) => this.settingsApi.get(params),
+  });
 
   /** The workspace's inertia display unit; the default when the settings could not be read. */
-  protected readonly unit = computed<InertiaUnit>(() => (this.settings.hasValue() ? this.settings.value().displayUnits.inertia : FALLBACK_UNIT));
+  protected readonly unit = computed<InertiaUnit>(() =>
+    this.settings.hasValue() ? this.settings.value().displayUnits.inertia : FALLBACK_UNIT,
+  );
   protected readonly unitFallback = computed(() => !!this.settings.error());
 
   protected readonly measurements = rxResource({
@@ -137,7 +171,10 @@ export class MeasuredData {
       const chosen = this.chosen();
       if (chosen && !this.variant()) untracked(() => this.writeAddress(chosen.id));
     });
-    inject(DestroyRef).onDestroy(() => { this.upload?.unsubscribe(); this.removal?.unsubscribe(); });
+    inject(DestroyRef).onDestroy(() => {
+      this.upload?.unsubscribe();
+      this.removal?.unsubscribe();
+    });
   }
 
   /** The picker changed: show that variant's readings. */
@@ -298,7 +335,11 @@ export class MeasuredData {
         error: (error: unknown) => {
           this.removing.set(null);
           const fault = toApiError(error);
-          this.removeFailure.set(fault.status === 404 ? 'Those readings were already removed; the table shows what is left.' : `Nothing was removed: ${fault.message}`);
+          this.removeFailure.set(
+            fault.status === 404
+              ? 'Those readings were already removed; the table shows what is left.'
+              : `Nothing was removed: ${fault.message}`,
+          );
           if (fault.status === 404) this.measurements.reload();
         },
       });
@@ -313,6 +354,11 @@ export class MeasuredData {
   }
 
   private writeAddress(variantId: string): void {
-    void this.router.navigate([], { relativeTo: this.route, queryParams: { variant: variantId }, queryParamsHandling: 'merge', replaceUrl: true });
+    void this.router.navigate([], {
+      relativeTo: this.route,
+      queryParams: { variant: variantId },
+      queryParamsHandling: 'merge',
+      replaceUrl: true,
+    });
   }
 }

@@ -61,7 +61,12 @@ describe('describeDifference', () => {
   it(`flags only beyond ±${DIFFERENCE_FLAG_PERCENT} %, in words and with an icon`, () => {
     expect(describeDifference(5)).toMatchObject({ state: 'near', words: 'within 5 % of the prediction', icon: 'check_circle' });
     expect(describeDifference(-5)).toMatchObject({ state: 'near' });
-    expect(describeDifference(5.04)).toMatchObject({ state: 'far', text: '+5.0 %', words: 'above the prediction by more than 5 %', icon: 'warning' });
+    expect(describeDifference(5.04)).toMatchObject({
+      state: 'far',
+      text: '+5.0 %',
+      words: 'above the prediction by more than 5 %',
+      icon: 'warning',
+    });
     expect(describeDifference(-12.6)).toMatchObject({ state: 'far', text: '−12.6 %', words: 'below the prediction by more than 5 %' });
     expect(describeDifference(-3, 2)).toMatchObject({ state: 'far', words: 'below the prediction by more than 2 %' });
   });
@@ -86,7 +91,9 @@ describe('comparedWith', () => {
 
 describe('templateCsv', () => {
   it('has the header the server asks for and one blank row per axis in the given unit', () => {
-    expect(templateCsv('kg·cm²', ['major', 'swing'])).toBe('axis,value,unit,method\r\nmajor,,kg·cm²,compound pendulum\r\nswing,,kg·cm²,compound pendulum\r\n');
+    expect(templateCsv('kg·cm²', ['major', 'swing'])).toBe(
+      'axis,value,unit,method\r\nmajor,,kg·cm²,compound pendulum\r\nswing,,kg·cm²,compound pendulum\r\n',
+    );
     const lines = templateCsv('g·cm²').trim().split('\r\n');
     expect(lines[0]).toBe('axis,value,unit,method');
     expect(lines.slice(1).map((l) => l.split(',')[0])).toEqual(['major', 'intermediate', 'minor', 'swing', 'twist']);

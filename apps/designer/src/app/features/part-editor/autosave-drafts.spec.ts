@@ -28,13 +28,22 @@ describe('autosaveDrafts', () => {
 
   it('reports a 409 as a conflict and keeps the document it could not save', () => {
     scheduler.run(({ hot, expectObservable }) => {
-      const stale = ApiError.fromHttpError(new HttpErrorResponse({ status: 409, error: { error: { code: 'stale_version', message: 'Someone saved this part after you loaded it.', field: 'draftVersion' } } }));
+      const stale = ApiError.fromHttpError(
+        new HttpErrorResponse({
+          status: 409,
+          error: { error: { code: 'stale_version', message: 'Someone saved this part after you loaded it.', field: 'draftVersion' } },
+        }),
+      );
       const out = autosaveDrafts(hot('a', { a: doc('mine') }), () => throwError(() => stale), 1, scheduler);
-      expectObservable(out.pipe(kind((o) => (o.kind === 'conflict' ? `${o.kind}:${o.document.name}:${o.error.code}` : o.kind)))).toBe('-c', { c: 'conflict:mine:stale_version' });
+      expectObservable(out.pipe(kind((o) => (o.kind === 'conflict' ? `${o.kind}:${o.document.name}:${o.error.code}` : o.kind)))).toBe(
+        '-c',
+        { c: 'conflict:mine:stale_version' },
+      );
     });
   });
 });
 
 function kind(f: (o: DraftSaveOutcome) => string = (o) => o.kind) {
-  return (source: Observable<DraftSaveOutcome>) => new Observable<string>((sub) => source.subscribe({ next: (o) => sub.next(f(o)), complete: () => sub.complete() }));
+  return (source: Observable<DraftSaveOutcome>) =>
+    new Observable<string>((sub) => source.subscribe({ next: (o) => sub.next(f(o)), complete: () => sub.complete() }));
 }

@@ -29,7 +29,8 @@ export function analysisRequest(doc: DraftDocument, materials: ReadonlyMap<strin
   if (materials.size > 0) {
     doc.primitives.forEach((p, i) => {
       const path = `primitives[${i}].materialId`;
-      if (typeof p.materialId === 'string' && p.materialId && !materials.has(p.materialId) && !issues[path]) issues[path] = 'is not in the material list';
+      if (typeof p.materialId === 'string' && p.materialId && !materials.has(p.materialId) && !issues[path])
+        issues[path] = 'is not in the material list';
     });
   }
   return Object.keys(issues).length > 0 ? { ok: false, issues } : { ok: true, document: doc };

@@ -27,10 +27,14 @@ export interface DraftDocument {
 export function toDraftDocument(value: unknown, fallbackName?: string): DraftDocument {
   const source = value && typeof value === 'object' && !Array.isArray(value) ? (value as Record<string, unknown>) : {};
   const primitives = Array.isArray(source['primitives'])
-    ? (source['primitives'] as unknown[]).filter((p): p is DraftPrimitive => !!p && typeof p === 'object' && typeof (p as DraftPrimitive).shape === 'string')
+    ? (source['primitives'] as unknown[])
+        .filter((p): p is DraftPrimitive => !!p && typeof p === 'object' && typeof (p as DraftPrimitive).shape === 'string')
         .map((p, i) => ({ ...p, id: typeof p.id === 'string' && p.id ? p.id : `primitive-${i + 1}` }))
     : [];
-  const spin = source['spin'] && typeof source['spin'] === 'object' ? (source['spin'] as DraftDocument['spin']) : { axis: [0, 0, 1], rate: 10 * Math.PI, misalignmentDeg: 1 };
+  const spin =
+    source['spin'] && typeof source['spin'] === 'object'
+      ? (source['spin'] as DraftDocument['spin'])
+      : { axis: [0, 0, 1], rate: 10 * Math.PI, misalignmentDeg: 1 };
   const doc: DraftDocument = { ...source, primitives, spin: { ...spin, axis: Array.isArray(spin.axis) ? spin.axis : [0, 0, 1] } };
   if (doc.name === undefined && fallbackName) doc.name = fallbackName;
   return doc;

@@ -21,7 +21,10 @@ export class EditHistory<T> {
   /** Whether there is an undone step to redo. */
   readonly canRedo = computed(() => this.future().length > 0);
 
-  constructor(initial: T, private readonly limit = HISTORY_LIMIT) {
+  constructor(
+    initial: T,
+    private readonly limit = HISTORY_LIMIT,
+  ) {
     this.presentValue = signal(initial);
     this.present = this.presentValue.asReadonly();
   }

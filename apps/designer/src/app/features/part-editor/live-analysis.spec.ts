@@ -64,7 +64,12 @@ describe('liveAnalysis', () => {
       const docs = hot('a-----b', { a: doc(0.01), b: doc(0.02) });
       const out = liveAnalysis(docs, prepare, analyze, 1, scheduler);
       // While b loads, the report of a stays on screen.
-      expectObservable(out.pipe(mapShape(shape))).toBe('-lr----LR', { l: 'loading:-', r: 'ready:0.01', L: 'loading:0.01', R: 'ready:0.02' });
+      expectObservable(out.pipe(mapShape(shape))).toBe('-lr----LR', {
+        l: 'loading:-',
+        r: 'ready:0.01',
+        L: 'loading:0.01',
+        R: 'ready:0.02',
+      });
     });
   });
 
@@ -84,7 +89,16 @@ describe('liveAnalysis', () => {
   it('maps a server error naming a field to that field', () => {
     scheduler.run(({ hot, expectObservable }) => {
       const refusal = ApiError.fromHttpError(
-        new HttpErrorResponse({ status: 422, error: { error: { code: 'unanalysable', message: 'Primitives[0].density removes more mass than there is.', field: 'primitives[0].density' } } }),
+        new HttpErrorResponse({
+          status: 422,
+          error: {
+            error: {
+              code: 'unanalysable',
+              message: 'Primitives[0].density removes more mass than there is.',
+              field: 'primitives[0].density',
+            },
+          },
+        }),
       );
       const analyze = () => throwError(() => refusal);
       const docs = hot('a', { a: doc(0.01) });
@@ -105,5 +119,8 @@ describe('liveAnalysis', () => {
 });
 
 function mapShape<T>(f: (a: LiveAnalysis) => T) {
-  return (source: Observable<LiveAnalysis>) => new Observable<T>((sub) => source.subscribe({ next: (a) => sub.next(f(a)), error: (e) => sub.error(e), complete: () => sub.complete() }));
+  return (source: Observable<LiveAnalysis>) =>
+    new Observable<T>((sub) =>
+      source.subscribe({ next: (a) => sub.next(f(a)), error: (e) => sub.error(e), complete: () => sub.complete() }),
+    );
 }

@@ -1,4 +1,13 @@
-import { fileProblem, meshReferenceProblem, formatBytes, meshOptionLabel, triangleText, uploadFailureMessage, uploadName, uploadProgressView } from './mesh-picker-model';
+import {
+  fileProblem,
+  meshReferenceProblem,
+  formatBytes,
+  meshOptionLabel,
+  triangleText,
+  uploadFailureMessage,
+  uploadName,
+  uploadProgressView,
+} from './mesh-picker-model';
 
 describe('the mesh picker model', () => {
   it('writes file sizes with decimal prefixes (IEC 80000-13: 1 kB = 1000 B, 1 MB = 10⁶ B)', () => {
@@ -16,8 +25,14 @@ describe('the mesh picker model', () => {
   });
 
   it('says what the upload is doing', () => {
-    expect(uploadProgressView({ kind: 'uploading', fraction: 0.404 }, 'head.stl')).toEqual({ text: 'Uploading head.stl… 40 %', percent: 40 });
-    expect(uploadProgressView({ kind: 'uploading', fraction: null }, 'head.stl')).toEqual({ text: 'Uploading and checking head.stl…', percent: null });
+    expect(uploadProgressView({ kind: 'uploading', fraction: 0.404 }, 'head.stl')).toEqual({
+      text: 'Uploading head.stl… 40 %',
+      percent: 40,
+    });
+    expect(uploadProgressView({ kind: 'uploading', fraction: null }, 'head.stl')).toEqual({
+      text: 'Uploading and checking head.stl…',
+      percent: null,
+    });
     expect(uploadProgressView({ kind: 'checking' }, 'head.stl')).toEqual({ text: 'Checking the mesh in head.stl…', percent: null });
   });
 
@@ -42,7 +57,9 @@ describe('the mesh picker model', () => {
   });
 
   it('words a missing or unknown mesh reference for the picker', () => {
-    expect(meshReferenceProblem('is required (or give inline vertices and triangles)')).toBe('Choose an uploaded mesh or upload an STL file.');
+    expect(meshReferenceProblem('is required (or give inline vertices and triangles)')).toBe(
+      'Choose an uploaded mesh or upload an STL file.',
+    );
     expect(meshReferenceProblem('is not a known mesh (m-9)')).toBe('Mesh is not a known mesh (m-9)');
     expect(meshReferenceProblem(null)).toBeNull();
   });

@@ -11,13 +11,33 @@ import { of } from 'rxjs';
 import { MeshPicker } from './mesh-picker';
 
 // An invented workspace and user.
-const HARBOUR_WORKSPACE = { id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b', name: 'Harbour Street Gear Lab', state: 'active' as const, createdAt: '2026-11-02T09:00:00.000Z' };
+const HARBOUR_WORKSPACE = {
+  id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b',
+  name: 'Harbour Street Gear Lab',
+  state: 'active' as const,
+  createdAt: '2026-11-02T09:00:00.000Z',
+};
 const SESSION = {
-  accessToken: 'token-one', expiresIn: 900, memberships: [{ workspace: HARBOUR_WORKSPACE, role: 'designer' as const }],
-  user: { id: '5e4d3c2b-1a09-4f8e-b7d6-c5b4a3928170', email: 'mira.okafor@example.test', name: 'Mira Okafor', isOperator: false, createdAt: '2026-11-02T09:00:00.000Z' },
+  accessToken: 'token-one',
+  expiresIn: 900,
+  memberships: [{ workspace: HARBOUR_WORKSPACE, role: 'designer' as const }],
+  user: {
+    id: '5e4d3c2b-1a09-4f8e-b7d6-c5b4a3928170',
+    email: 'mira.okafor@example.test',
+    name: 'Mira Okafor',
+    isOperator: false,
+    createdAt: '2026-11-02T09:00:00.000Z',
+  },
 };
 const mesh = (id: string, name: string, triangleCount: number, byteSize: number): Mesh => ({
-  id, name, sha256: 'b'.repeat(64), byteSize, triangleCount, format: 'binary', report: { fixed: [], warnings: [] }, createdAt: '2026-11-20T10:00:00.000Z',
+  id,
+  name,
+  sha256: 'b'.repeat(64),
+  byteSize,
+  triangleCount,
+  format: 'binary',
+  report: { fixed: [], warnings: [] },
+  createdAt: '2026-11-20T10:00:00.000Z',
 });
 const HEAD = mesh('11111111-1111-4111-8111-111111111111', 'club-head', 12_800, 640_084);
 const KNOB = mesh('22222222-2222-4222-8222-222222222222', 'knob', 12, 684);
@@ -114,7 +134,9 @@ describe('MeshPicker', () => {
     const { fixture, host, testId, pick } = await render({ value: HEAD.id });
     await pick('open.stl');
     const refusal = 'The STL cannot be used: the mesh is not closed: 4 edges belong to one triangle only.';
-    backend.expectOne({ method: 'POST', url: LIST_URL }).flush({ error: { code: 'mesh_invalid', message: refusal, field: 'file' } }, { status: 422, statusText: 'Unprocessable Entity' });
+    backend
+      .expectOne({ method: 'POST', url: LIST_URL })
+      .flush({ error: { code: 'mesh_invalid', message: refusal, field: 'file' } }, { status: 422, statusText: 'Unprocessable Entity' });
     await fixture.whenStable();
     expect(testId('mesh-error')!.textContent).toContain(refusal);
     expect(testId('mesh-error')!.getAttribute('role')).toBe('alert');
@@ -148,12 +170,18 @@ describe('MeshPicker', () => {
   describe('deleting an upload', () => {
     const usageUrl = (m: Mesh) => `${LIST_URL}/${m.id}/usage`;
     const rows = (el: HTMLElement) => [...el.querySelectorAll<HTMLElement>('[data-testid="mesh-upload-row"]')];
-    const deleteButton = (el: HTMLElement, name: string) => rows(el).find((r) => r.textContent!.includes(name))!.querySelector<HTMLButtonElement>('[data-testid="mesh-delete"]')!;
+    const deleteButton = (el: HTMLElement, name: string) =>
+      rows(el)
+        .find((r) => r.textContent!.includes(name))!
+        .querySelector<HTMLButtonElement>('[data-testid="mesh-delete"]')!;
     const note = (el: HTMLElement) => el.querySelector<HTMLElement>('[data-testid="mesh-delete-note"]');
 
     it('lists the uploads with a delete button each, and deletes one nothing uses after the user confirms', async () => {
       const { fixture, el, testId } = await render();
-      expect(rows(el).map((r) => r.querySelector('.tw-mesh-upload-name')!.textContent!.trim())).toEqual(['club-head · 12,800 triangles · 640 kB', 'knob · 12 triangles · 684 B']);
+      expect(rows(el).map((r) => r.querySelector('.tw-mesh-upload-name')!.textContent!.trim())).toEqual([
+        'club-head · 12,800 triangles · 640 kB',
+        'knob · 12 triangles · 684 B',
+      ]);
       expect(deleteButton(el, 'knob').getAttribute('aria-label')).toBe('Delete the mesh knob');
       expect(testId('mesh-manage')!.textContent).toContain('uploads (2)');
       deleteButton(el, 'knob').click();
@@ -187,11 +215,23 @@ describe('MeshPicker', () => {
     it('says which parts still use a mesh, and neither asks nor deletes', async () => {
       const { fixture, el } = await render();
       deleteButton(el, 'knob').click();
-      const usage: MeshUsage = { parts: [{ partId: '33333333-3333-4333-8333-333333333333', projectId: '44444444-4444-4444-8444-444444444444', partName: 'Head core', inDraft: true, variantNumbers: [1, 2] }] };
+      const usage: MeshUsage = {
+        parts: [
+          {
+            partId: '33333333-3333-4333-8333-333333333333',
+            projectId: '44444444-4444-4444-8444-444444444444',
+            partName: 'Head core',
+            inDraft: true,
+            variantNumbers: [1, 2],
+          },
+        ],
+      };
       backend.expectOne({ method: 'GET', url: usageUrl(KNOB) }).flush(usage);
       await fixture.whenStable();
       expect(asked).toHaveLength(0);
-      expect(note(el)!.textContent).toContain('“knob” is still used by Head core (its draft and saved variants v1, v2), so it cannot be deleted.');
+      expect(note(el)!.textContent).toContain(
+        '“knob” is still used by Head core (its draft and saved variants v1, v2), so it cannot be deleted.',
+      );
       expect(note(el)!.getAttribute('role')).toBe('alert');
       expect(rows(el)).toHaveLength(2);
     });
@@ -210,7 +250,13 @@ describe('MeshPicker', () => {
       deleteButton(el, 'knob').click();
       backend.expectOne({ method: 'GET', url: usageUrl(KNOB) }).flush({ parts: [] } satisfies MeshUsage);
       backend.expectOne({ method: 'DELETE', url: `${LIST_URL}/${KNOB.id}` }).flush(
-        { error: { code: 'mesh_in_use', message: 'The mesh “knob” is still used by Grip trial (its draft), so it cannot be deleted.', field: 'meshId' } },
+        {
+          error: {
+            code: 'mesh_in_use',
+            message: 'The mesh “knob” is still used by Grip trial (its draft), so it cannot be deleted.',
+            field: 'meshId',
+          },
+        },
         { status: 409, statusText: 'Conflict' },
       );
       await fixture.whenStable();

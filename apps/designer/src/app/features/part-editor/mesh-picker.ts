@@ -1,4 +1,15 @@
-import { ChangeDetectionStrategy, Component, computed, DestroyRef, effect, forwardRef, inject, input, signal, untracked } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  DestroyRef,
+  effect,
+  forwardRef,
+  inject,
+  input,
+  signal,
+  untracked,
+} from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { type ControlValueAccessor, FormControl, NG_VALUE_ACCESSOR, ReactiveFormsModule } from '@angular/forms';
 import { MatButton, MatIconButton } from '@angular/material/button';
@@ -9,7 +20,14 @@ import { MeshesApi, toApiError, WorkspaceContext } from '@tumblewise/api-client'
 import { meshInUseMessage, type Mesh } from '@tumblewise/shared';
 import { Confirmation } from '@tumblewise/ui';
 import { EMPTY, filter, finalize, map, of, switchMap, type Subscription } from 'rxjs';
-import { fileProblem, meshOptionLabel, uploadFailureMessage, uploadName, uploadProgressView, type UploadProgressView } from './mesh-picker-model';
+import {
+  fileProblem,
+  meshOptionLabel,
+  uploadFailureMessage,
+  uploadName,
+  uploadProgressView,
+  type UploadProgressView,
+} from './mesh-picker-model';
 
 let nextId = 0;
 
@@ -66,7 +84,10 @@ export class MeshPicker implements ControlValueAccessor {
   protected readonly unknownId = computed(() => !!this.value() && this.list.hasValue() && !this.selected());
   protected readonly fieldProblem = computed(() => this.uploadError() ?? this.problem());
   /** The list's own control: invalid while there is a problem, so the field shows it as an error. */
-  protected readonly selectControl = new FormControl('', { nonNullable: true, validators: () => (this.fieldProblem() ? { problem: true } : null) });
+  protected readonly selectControl = new FormControl('', {
+    nonNullable: true,
+    validators: () => (this.fieldProblem() ? { problem: true } : null),
+  });
   protected readonly label = meshOptionLabel;
 
   /** Designers, admins and owners may delete uploads (as the server allows). */
@@ -89,7 +110,10 @@ export class MeshPicker implements ControlValueAccessor {
         if (problem) this.selectControl.markAsTouched();
       });
     });
-    inject(DestroyRef).onDestroy(() => { this.upload$?.unsubscribe(); this.delete$?.unsubscribe(); });
+    inject(DestroyRef).onDestroy(() => {
+      this.upload$?.unsubscribe();
+      this.delete$?.unsubscribe();
+    });
   }
 
   writeValue(value: unknown): void {
@@ -160,7 +184,10 @@ export class MeshPicker implements ControlValueAccessor {
     this.deleteNote.set(null);
     // The draft holding this choice may not be saved yet, so the server would not know of it.
     if (mesh.id === this.value()) {
-      this.deleteNote.set({ kind: 'refused', text: `“${mesh.name}” is the mesh of this primitive, so it cannot be deleted. Choose another mesh here first.` });
+      this.deleteNote.set({
+        kind: 'refused',
+        text: `“${mesh.name}” is the mesh of this primitive, so it cannot be deleted. Choose another mesh here first.`,
+      });
       return;
     }
     this.deleting.set(mesh.id);

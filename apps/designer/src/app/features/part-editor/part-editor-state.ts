@@ -54,7 +54,10 @@ export class PartEditorState {
   /** Adds a primitive of `shape` at the end and selects it. */
   addPrimitive(shape: PrimitiveShape): void {
     const doc = this.document();
-    const primitive = newPrimitive(shape, doc.primitives.map((p) => p.id));
+    const primitive = newPrimitive(
+      shape,
+      doc.primitives.map((p) => p.id),
+    );
     this.structural({ ...doc, primitives: [...doc.primitives, primitive] }, doc.primitives.length);
   }
 
@@ -63,7 +66,13 @@ export class PartEditorState {
     const doc = this.document();
     const source = doc.primitives[index];
     if (!source) return;
-    const copy = { ...cloneJson(source), id: freshId(`${source.id}-copy`, doc.primitives.map((p) => p.id)) };
+    const copy = {
+      ...cloneJson(source),
+      id: freshId(
+        `${source.id}-copy`,
+        doc.primitives.map((p) => p.id),
+      ),
+    };
     const primitives = [...doc.primitives];
     primitives.splice(index + 1, 0, copy);
     this.structural({ ...doc, primitives }, index + 1);

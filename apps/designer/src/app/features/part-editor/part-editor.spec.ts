@@ -10,18 +10,41 @@ import { AUTOSAVE_DEBOUNCE_MS } from './autosave-drafts';
 import { ANALYSIS_DEBOUNCE_MS } from './live-analysis';
 import { PartEditor } from './part-editor';
 
-const HARBOUR_WORKSPACE = { id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b', name: 'Harbour Street Gear Lab', state: 'active' as const, createdAt: '2026-11-02T09:00:00.000Z' };
+const HARBOUR_WORKSPACE = {
+  id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b',
+  name: 'Harbour Street Gear Lab',
+  state: 'active' as const,
+  createdAt: '2026-11-02T09:00:00.000Z',
+};
 const PROJECT_ID = '40000000-0000-4000-8000-000000000001';
 const PART_ID = '50000000-0000-4000-8000-000000000001';
 const BASE = `/api/v1/workspaces/${HARBOUR_WORKSPACE.id}`;
 
 // An invented part: a baton handle.
 const PART: Part = {
-  id: PART_ID, projectId: PROJECT_ID, name: 'Baton', draftVersion: 4, latestVariant: null, variantCount: 0,
-  createdAt: '2026-11-21T09:00:00.000Z', updatedAt: '2026-11-21T09:00:00.000Z',
+  id: PART_ID,
+  projectId: PROJECT_ID,
+  name: 'Baton',
+  draftVersion: 4,
+  latestVariant: null,
+  variantCount: 0,
+  createdAt: '2026-11-21T09:00:00.000Z',
+  updatedAt: '2026-11-21T09:00:00.000Z',
   draft: {
-    name: 'Baton', category: 'juggling',
-    primitives: [{ id: 'shaft', shape: 'cylinder', radius: 0.0135, length: 0.5, position: [0, 0, 0.25], rotationDeg: [0, 0, 0], density: 650, mode: 'add' }],
+    name: 'Baton',
+    category: 'juggling',
+    primitives: [
+      {
+        id: 'shaft',
+        shape: 'cylinder',
+        radius: 0.0135,
+        length: 0.5,
+        position: [0, 0, 0.25],
+        rotationDeg: [0, 0, 0],
+        density: 650,
+        mode: 'add',
+      },
+    ],
     spin: { axis: [1, 0, 0], rate: 10 * Math.PI, misalignmentDeg: 1 },
   },
 };
@@ -72,7 +95,13 @@ describe('PartEditor', () => {
     TestBed.inject(AuthState).setSession({
       accessToken: 'token-one',
       expiresIn: 900,
-      user: { id: '10000000-0000-4000-8000-000000000001', email: 'mira.okafor@example.test', name: 'Mira Okafor', isOperator: false, createdAt: HARBOUR_WORKSPACE.createdAt },
+      user: {
+        id: '10000000-0000-4000-8000-000000000001',
+        email: 'mira.okafor@example.test',
+        name: 'Mira Okafor',
+        isOperator: false,
+        createdAt: HARBOUR_WORKSPACE.createdAt,
+      },
       memberships: [{ workspace: HARBOUR_WORKSPACE, role }],
     });
     backend = TestBed.inject(HttpTestingController);
@@ -84,7 +113,15 @@ describe('PartEditor', () => {
     fixture.detectChanges();
     await settle();
     backend.expectOne(`${BASE}/parts/${PART_ID}`).flush(PART);
-    backend.expectOne(`${BASE}/projects/${PROJECT_ID}`).flush({ id: PROJECT_ID, name: 'Juggling baton', category: 'juggling', notes: '', archived: false, createdAt: PART.createdAt, updatedAt: PART.updatedAt });
+    backend.expectOne(`${BASE}/projects/${PROJECT_ID}`).flush({
+      id: PROJECT_ID,
+      name: 'Juggling baton',
+      category: 'juggling',
+      notes: '',
+      archived: false,
+      createdAt: PART.createdAt,
+      updatedAt: PART.updatedAt,
+    });
     backend.expectOne(`${BASE}/materials`).flush([]);
     backend.expectOne(`${BASE}/parts/${PART_ID}/variants`).flush(variants);
     await settle();
@@ -173,7 +210,11 @@ describe('PartEditor', () => {
     answerAnalysis();
 
     (host.querySelector('[data-testid="conflict-reload"]') as HTMLElement).click();
-    const theirs = { ...PART, draftVersion: 7, draft: { ...(PART.draft as object), primitives: [{ ...(PART.draft as { primitives: object[] }).primitives[0], length: 0.45 }] } };
+    const theirs = {
+      ...PART,
+      draftVersion: 7,
+      draft: { ...(PART.draft as object), primitives: [{ ...(PART.draft as { primitives: object[] }).primitives[0], length: 0.45 }] },
+    };
     backend.expectOne(`${BASE}/parts/${PART_ID}`).flush(theirs);
     await settle();
     expect(host.querySelector('[data-testid="conflict-banner"]')).toBeNull();
@@ -216,7 +257,13 @@ describe('PartEditor', () => {
     const post = backend.expectOne((r) => r.method === 'POST' && r.url === `${BASE}/parts/${PART_ID}/variants`);
     expect(post.request.body).toMatchObject({ label: 'Thicker shaft', document: { primitives: [{ id: 'shaft', radius: 0.0135 }] } });
     post.flush(
-      { error: { code: 'unanalysable', message: 'Primitives[0].density leaves no mass after the removals.', field: 'primitives[0].density' } },
+      {
+        error: {
+          code: 'unanalysable',
+          message: 'Primitives[0].density leaves no mass after the removals.',
+          field: 'primitives[0].density',
+        },
+      },
       { status: 422, statusText: 'Unprocessable Entity' },
     );
     await settle();
@@ -228,8 +275,19 @@ describe('PartEditor', () => {
   it('opens the variant named in the address (the review e-mail link) once the list has loaded', async () => {
     const document = PART.draft as PartDocument;
     const linked: Variant = {
-      id: '30000000-0000-4000-8000-000000000007', partId: PART_ID, number: 4, label: 'linked', notes: '', document, report: analyzePart(document),
-      engineVersion: 'engine test', status: 'in_review', author: null, version: 2, createdAt: PART.createdAt, updatedAt: PART.updatedAt,
+      id: '30000000-0000-4000-8000-000000000007',
+      partId: PART_ID,
+      number: 4,
+      label: 'linked',
+      notes: '',
+      document,
+      report: analyzePart(document),
+      engineVersion: 'engine test',
+      status: 'in_review',
+      author: null,
+      version: 2,
+      createdAt: PART.createdAt,
+      updatedAt: PART.updatedAt,
     };
     await open('reviewer', [linked], linked.id);
     expect(host.querySelector('[data-testid="back-to-live"]')).not.toBeNull();

@@ -1,10 +1,31 @@
-import { ChangeDetectionStrategy, Component, computed, DestroyRef, effect, ElementRef, inject, input, signal, untracked, viewChild } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  DestroyRef,
+  effect,
+  ElementRef,
+  inject,
+  input,
+  signal,
+  untracked,
+  viewChild,
+} from '@angular/core';
 import { rxResource, takeUntilDestroyed, toObservable } from '@angular/core/rxjs-interop';
 import { MatButton, MatIconButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatTooltip } from '@angular/material/tooltip';
 import { RouterLink } from '@angular/router';
-import { AnalysisApi, MaterialsApi, PartsApi, ProjectsApi, toApiError, VariantsApi, WorkspaceContext, type ApiError } from '@tumblewise/api-client';
+import {
+  AnalysisApi,
+  MaterialsApi,
+  PartsApi,
+  ProjectsApi,
+  toApiError,
+  VariantsApi,
+  WorkspaceContext,
+  type ApiError,
+} from '@tumblewise/api-client';
 import type { SpinReport } from '@tumblewise/engine';
 import type { Material, Part, PartDocument, PrimitiveShape, Variant, VariantStatus } from '@tumblewise/shared';
 import { EmptyState, ErrorBanner, LoadingState, PageHeader } from '@tumblewise/ui';
@@ -104,15 +125,28 @@ export class PartEditor {
     const workspaceId = this.workspaceId();
     return workspaceId ? { workspaceId, partId: this.partId(), projectId: this.projectId() } : undefined;
   });
-  protected readonly part = rxResource({ params: this.partScope, stream: ({ params }) => this.partsApi.get(params.workspaceId, params.partId) });
-  protected readonly project = rxResource({ params: this.partScope, stream: ({ params }) => this.projectsApi.get(params.workspaceId, params.projectId) });
+  protected readonly part = rxResource({
+    params: this.partScope,
+    stream: ({ params }) => this.partsApi.get(params.workspaceId, params.partId),
+  });
+  protected readonly project = rxResource({
+    params: this.partScope,
+    stream: ({ params }) => this.projectsApi.get(params.workspaceId, params.projectId),
+  });
   protected readonly crumbs = computed((): Crumb[] => [
     { label: 'Projects', link: '/', testId: 'crumb-projects' },
     { label: this.project.value()?.name ?? 'Project', link: ['/projects', this.projectId()], testId: 'crumb-project' },
     { label: this.part.value()?.name ?? 'Part' },
   ]);
-  protected readonly materials = rxResource({ params: this.workspaceId, stream: ({ params }) => this.materialsApi.list(params), defaultValue: [] as Material[] });
-  protected readonly variants = rxResource({ params: this.partScope, stream: ({ params }) => this.variantsApi.list(params.workspaceId, params.partId) });
+  protected readonly materials = rxResource({
+    params: this.workspaceId,
+    stream: ({ params }) => this.materialsApi.list(params),
+    defaultValue: [] as Material[],
+  });
+  protected readonly variants = rxResource({
+    params: this.partScope,
+    stream: ({ params }) => this.variantsApi.list(params.workspaceId, params.partId),
+  });
   protected readonly loadError = computed(() => {
     const error = this.part.error();
     return error ? toApiError(error).message : null;
@@ -171,7 +205,9 @@ export class PartEditor {
       .map(([path, message]) => (path ? `${path} ${message}` : message)),
   );
   protected readonly issueCount = computed(() => Object.keys(this.issues()).length);
-  protected readonly shownReport = computed<SpinReport | null>(() => (this.openedVariant()?.report as SpinReport | undefined) ?? this.analysis().report);
+  protected readonly shownReport = computed<SpinReport | null>(
+    () => (this.openedVariant()?.report as SpinReport | undefined) ?? this.analysis().report,
+  );
   /** The document the shown report belongs to (valid: it was analysed or saved). */
   /** Material references become densities, so the viewer's motion request needs no workspace lookup. */
   protected readonly shownDocument = computed<PartDocument | null>(() => {
@@ -217,7 +253,10 @@ export class PartEditor {
     // Live report: debounced, stale answers dropped; the server resolves material references in the workspace.
     const documents = toObservable(computed(() => ({ doc: this.state.document(), materials: this.materialMap(), loaded: this.loaded() })));
     liveAnalysis(
-      documents.pipe(filter((x) => x.loaded), map((x) => x.doc)),
+      documents.pipe(
+        filter((x) => x.loaded),
+        map((x) => x.doc),
+      ),
       (doc) => analysisRequest(doc, this.materialMap()),
       (doc) => this.analysisApi.analyze(doc, this.workspaceId()),
     )
@@ -232,7 +271,8 @@ export class PartEditor {
           this.draftVersion = outcome.part.draftVersion;
           this.savedJson = JSON.stringify(outcome.document);
           this.draftFailure.set(null);
-          if (this.draftStatus() !== 'conflict') this.draftStatus.set(JSON.stringify(this.state.document()) === this.savedJson ? 'saved' : 'pending');
+          if (this.draftStatus() !== 'conflict')
+            this.draftStatus.set(JSON.stringify(this.state.document()) === this.savedJson ? 'saved' : 'pending');
         } else if (outcome.kind === 'conflict') {
           this.draftStatus.set('conflict');
         } else {
@@ -254,7 +294,9 @@ export class PartEditor {
       const scope = this.partScope();
       const doc = this.state.document();
       if (scope && this.loaded() && this.mayEdit() && !this.conflict() && JSON.stringify(doc) !== this.savedJson) {
-        this.partsApi.saveDraft(scope.workspaceId, scope.partId, { draft: doc, draftVersion: this.draftVersion }).subscribe({ error: () => undefined });
+        this.partsApi
+          .saveDraft(scope.workspaceId, scope.partId, { draft: doc, draftVersion: this.draftVersion })
+          .subscribe({ error: () => undefined });
       }
     });
   }
@@ -338,13 +380,20 @@ export class PartEditor {
       return;
     }
     this.dialog
-      .open<SaveVariantDialog, SaveVariantDialogData, SaveVariantChoice>(SaveVariantDialog, { data: { nextNumber: this.nextVariantNumber() }, width: '480px' })
+      .open<SaveVariantDialog, SaveVariantDialogData, SaveVariantChoice>(SaveVariantDialog, {
+        data: { nextNumber: this.nextVariantNumber() },
+        width: '480px',
+      })
       .afterClosed()
       .subscribe((choice) => {
         if (!choice) return;
         this.saving.set(true);
         this.variantsApi
-          .create(scope.workspaceId, scope.partId, { document: this.state.document(), ...(choice.label ? { label: choice.label } : {}), ...(choice.notes ? { notes: choice.notes } : {}) })
+          .create(scope.workspaceId, scope.partId, {
+            document: this.state.document(),
+            ...(choice.label ? { label: choice.label } : {}),
+            ...(choice.notes ? { notes: choice.notes } : {}),
+          })
           .subscribe({
             next: (variant) => {
               this.saving.set(false);

@@ -18,10 +18,13 @@ export function parsePartFile(text: string): ImportedPart {
   } catch (error) {
     return { ok: false, message: `The file is not valid JSON (${error instanceof Error ? error.message : 'parse error'}).` };
   }
-  if (!value || typeof value !== 'object' || Array.isArray(value)) return { ok: false, message: 'The file does not hold a part document (expected a JSON object).' };
+  if (!value || typeof value !== 'object' || Array.isArray(value))
+    return { ok: false, message: 'The file does not hold a part document (expected a JSON object).' };
   const record = value as Record<string, unknown>;
-  if (!Array.isArray(record['primitives'])) return { ok: false, message: 'The file does not hold a part document: "primitives" must be a list.' };
-  if (!record['spin'] || typeof record['spin'] !== 'object') return { ok: false, message: 'The file does not hold a part document: "spin" is missing.' };
+  if (!Array.isArray(record['primitives']))
+    return { ok: false, message: 'The file does not hold a part document: "primitives" must be a list.' };
+  if (!record['spin'] || typeof record['spin'] !== 'object')
+    return { ok: false, message: 'The file does not hold a part document: "spin" is missing.' };
   return { ok: true, document: toDraftDocument(value) };
 }
 
@@ -32,6 +35,10 @@ export function partFileText(doc: DraftDocument): string {
 
 /** A file name for the document: its name in kebab case, `.part.json`. */
 export function partFileName(doc: DraftDocument): string {
-  const base = (doc.name ?? 'part').toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '') || 'part';
+  const base =
+    (doc.name ?? 'part')
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, '-')
+      .replace(/^-+|-+$/g, '') || 'part';
   return `${base}.part.json`;
 }

@@ -27,12 +27,14 @@ const PATHS: Record<string, string> = {
   rate: 'spin.rate',
   misalignment: 'spin.misalignmentDeg',
   pivot: 'grip.pivotDistance',
-  ...Object.fromEntries([0, 1, 2].flatMap((i) => [
-    [`spinAxis_${i}`, `spin.axis[${i}]`],
-    [`gripPoint_${i}`, `grip.point[${i}]`],
-    [`gripAxis_${i}`, `grip.axis[${i}]`],
-    [`faceNormal_${i}`, `grip.faceNormal[${i}]`],
-  ])),
+  ...Object.fromEntries(
+    [0, 1, 2].flatMap((i) => [
+      [`spinAxis_${i}`, `spin.axis[${i}]`],
+      [`gripPoint_${i}`, `grip.point[${i}]`],
+      [`gripAxis_${i}`, `grip.axis[${i}]`],
+      [`faceNormal_${i}`, `grip.faceNormal[${i}]`],
+    ]),
+  ),
 };
 
 /**
@@ -42,7 +44,19 @@ const PATHS: Record<string, string> = {
 @Component({
   selector: 'tw-part-settings-form',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatError, MatHint, MatSuffix, MatInput, MatSelect, MatOption, MatCheckbox, FieldErrorPipe],
+  imports: [
+    ReactiveFormsModule,
+    MatFormField,
+    MatLabel,
+    MatError,
+    MatHint,
+    MatSuffix,
+    MatInput,
+    MatSelect,
+    MatOption,
+    MatCheckbox,
+    FieldErrorPipe,
+  ],
   templateUrl: './part-settings-form.html',
   styleUrl: './primitive-form.scss',
 })
@@ -58,7 +72,7 @@ export class PartSettingsForm {
   /** Emitted after each edit. */
   readonly changed = output<SettingsChange>();
   /** Emitted when a field loses focus. */
-  readonly editEnded = output<void>();
+  readonly editEnded = output();
 
   protected readonly categories = GEAR_CATEGORIES;
   protected readonly categoryLabels = CATEGORY_LABELS;

@@ -7,7 +7,7 @@ export type PartSettingsValue = Record<string, string | number | boolean | null>
 /** Bat pivot distance shown when a part has none (6 in from the knob, ASTM F2398), in m. */
 export const DEFAULT_PIVOT_DISTANCE = 0.1524;
 
-const AXES = ['spinAxis', 'gripAxis', 'faceNormal'] as const;
+type AxisField = 'spinAxis' | 'gripAxis' | 'faceNormal';
 const NUMBER_DIGITS = 12;
 
 /**
@@ -22,8 +22,10 @@ export function unitDirection(components: readonly (number | null)[]): (number |
   return [x, y, z].map((c) => roundSignificant(c / length, NUMBER_DIGITS) + 0);
 }
 
-const numberOrNull = (v: unknown): number | null => (v === null || v === '' || v === undefined || !Number.isFinite(Number(v)) ? null : Number(v));
-const triple = (v: unknown, fallback: number[]): (number | null)[] => (Array.isArray(v) ? [0, 1, 2].map((i) => numberOrNull(v[i])) : fallback);
+const numberOrNull = (v: unknown): number | null =>
+  v === null || v === '' || v === undefined || !Number.isFinite(Number(v)) ? null : Number(v);
+const triple = (v: unknown, fallback: number[]): (number | null)[] =>
+  Array.isArray(v) ? [0, 1, 2].map((i) => numberOrNull(v[i])) : fallback;
 
 /** The form value showing the part-wide settings of `doc` in display units. */
 export function settingsToFormValue(doc: DraftDocument): PartSettingsValue {
@@ -52,7 +54,7 @@ export function settingsToFormValue(doc: DraftDocument): PartSettingsValue {
 /** The part-wide fields of the document the form describes (SI: rad/s, m; directions unit length). */
 export function formValueToSettings(value: PartSettingsValue, doc: DraftDocument): Partial<DraftDocument> {
   const read = (name: string, i: number) => numberOrNull(value[`${name}_${i}`]);
-  const direction = (name: (typeof AXES)[number]) => unitDirection([read(name, 0), read(name, 1), read(name, 2)]);
+  const direction = (name: AxisField) => unitDirection([read(name, 0), read(name, 1), read(name, 2)]);
   const rate = displayToSi(value['rate'] as number | null, EDITOR_UNITS.rate);
   const changes: Partial<DraftDocument> = {
     spin: {

@@ -7,8 +7,15 @@ import { formValueToPrimitive, numericControls, primitiveToFormValue } from './p
 // References: SI Brochure (BIPM, 9th ed.): 1 mm = 10⁻³ m, 1 g = 10⁻³ kg exactly; one revolution is
 // 2π rad (definition of the radian). mathjs's own unit system is the second, independent reference.
 const HANDLE: DraftPrimitive = {
-  id: 'grip', shape: 'cylinder', radius: 0.0135, length: 0.19, position: [0, 0, 0.095], rotationDeg: [0, 0, 0],
-  density: 650, mode: 'add', tolerance: { density: 0.05 },
+  id: 'grip',
+  shape: 'cylinder',
+  radius: 0.0135,
+  length: 0.19,
+  position: [0, 0, 0.095],
+  rotationDeg: [0, 0, 0],
+  density: 650,
+  mode: 'add',
+  tolerance: { density: 0.05 },
 };
 
 function documentWith(primitive: DraftPrimitive): DraftDocument {
@@ -38,7 +45,16 @@ describe('display units of the editor', () => {
 describe('the primitive form model', () => {
   it('shows a cylinder in mm, kg/m³ and degrees', () => {
     const value = primitiveToFormValue(HANDLE);
-    expect(value).toMatchObject({ id: 'grip', mode: 'add', source: 'density', density: 650, radius: 13.5, length: 190, position_2: 95, rotation_0: 0 });
+    expect(value).toMatchObject({
+      id: 'grip',
+      mode: 'add',
+      source: 'density',
+      density: 650,
+      radius: 13.5,
+      length: 190,
+      position_2: 95,
+      rotation_0: 0,
+    });
   });
 
   it('round-trips a primitive and keeps the fields the form does not show (tolerance)', () => {
@@ -75,11 +91,22 @@ describe('the primitive form model', () => {
   });
 
   it('gives a box three size controls and a point mass only its mass', () => {
-    expect(numericControls('box').slice(0, 4).map((c) => c.path)).toEqual(['size[0]', 'size[1]', 'size[2]', 'wall']);
+    expect(
+      numericControls('box')
+        .slice(0, 4)
+        .map((c) => c.path),
+    ).toEqual(['size[0]', 'size[1]', 'size[2]', 'wall']);
     const point: DraftPrimitive = { id: 'tape', shape: 'point', mass: 0.003, position: [0.11, 0, 0.5] };
     const value = primitiveToFormValue(point);
     expect(value).toMatchObject({ source: 'mass', mass: 3, position_0: 110, position_2: 500 });
-    expect(formValueToPrimitive({ ...value, mass: 5 }, point)).toEqual({ id: 'tape', shape: 'point', mass: 0.005, position: [0.11, 0, 0.5], rotationDeg: [0, 0, 0], mode: 'add' });
+    expect(formValueToPrimitive({ ...value, mass: 5 }, point)).toEqual({
+      id: 'tape',
+      shape: 'point',
+      mass: 0.005,
+      position: [0.11, 0, 0.5],
+      rotationDeg: [0, 0, 0],
+      mode: 'add',
+    });
   });
 
   it('refuses a negative radius at its field with the shared schema rule', () => {
@@ -93,7 +120,16 @@ describe('the primitive form model', () => {
   });
 
   it('keeps a mesh primitive’s uploaded mesh and scale, and takes the one the picker chooses', () => {
-    const scan: DraftPrimitive = { id: 'head', shape: 'mesh', meshId: 'mesh-a', scale: 0.001, position: [0, 0, 0.4], rotationDeg: [0, 0, 0], density: 1150, mode: 'add' };
+    const scan: DraftPrimitive = {
+      id: 'head',
+      shape: 'mesh',
+      meshId: 'mesh-a',
+      scale: 0.001,
+      position: [0, 0, 0.4],
+      rotationDeg: [0, 0, 0],
+      density: 1150,
+      mode: 'add',
+    };
     const value = primitiveToFormValue(scan);
     expect(value).toMatchObject({ meshId: 'mesh-a', scale: 0.001, position_2: 400 });
     expect(formValueToPrimitive(value, scan)).toEqual(scan);

@@ -33,11 +33,18 @@ const siOf = (value: unknown, units: UnitChoice) => {
 export function numericControls(shape: DraftPrimitive['shape']): NumericControl[] {
   const controls: NumericControl[] = [];
   for (const field of SHAPE_FIELDS[shape] ?? []) {
-    if (field.components) field.components.forEach((c, i) => controls.push({ name: `${field.key}_${i}`, path: `${field.key}[${i}]`, label: `${field.label} ${c}`, units: field.units }));
+    if (field.components)
+      field.components.forEach((c, i) =>
+        controls.push({ name: `${field.key}_${i}`, path: `${field.key}[${i}]`, label: `${field.label} ${c}`, units: field.units }),
+      );
     else controls.push({ name: field.key, path: field.key, label: field.label, units: field.units });
   }
-  ['x', 'y', 'z'].forEach((c, i) => controls.push({ name: `position_${i}`, path: `position[${i}]`, label: `Position ${c}`, units: EDITOR_UNITS.length }));
-  ['x', 'y', 'z'].forEach((c, i) => controls.push({ name: `rotation_${i}`, path: `rotationDeg[${i}]`, label: `Rotation about ${c}`, units: EDITOR_UNITS.angle }));
+  ['x', 'y', 'z'].forEach((c, i) =>
+    controls.push({ name: `position_${i}`, path: `position[${i}]`, label: `Position ${c}`, units: EDITOR_UNITS.length }),
+  );
+  ['x', 'y', 'z'].forEach((c, i) =>
+    controls.push({ name: `rotation_${i}`, path: `rotationDeg[${i}]`, label: `Rotation about ${c}`, units: EDITOR_UNITS.angle }),
+  );
   return controls;
 }
 
@@ -63,7 +70,10 @@ export function primitiveToFormValue(p: DraftPrimitive): PrimitiveFormValue {
   };
   for (const field of SHAPE_FIELDS[p.shape] ?? []) {
     const v = p[field.key];
-    if (field.components) field.components.forEach((_, i) => (value[`${field.key}_${i}`] = siToDisplay(Array.isArray(v) ? (v[i] as number) : null, field.units)));
+    if (field.components)
+      field.components.forEach(
+        (_, i) => (value[`${field.key}_${i}`] = siToDisplay(Array.isArray(v) ? (v[i] as number) : null, field.units)),
+      );
     else value[field.key] = siToDisplay(v as number | undefined, field.units);
   }
   const position = Array.isArray(p.position) ? p.position : [0, 0, 0];

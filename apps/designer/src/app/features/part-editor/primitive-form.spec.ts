@@ -4,7 +4,14 @@ import type { DraftPrimitive } from './draft-document';
 import { PrimitiveForm, type PrimitiveChange } from './primitive-form';
 
 // Invented primitives (form wiring under test; the unit conversions are SI prefixes).
-const HOOP: DraftPrimitive = { id: 'hoop', shape: 'torus', majorRadius: 0.12, minorRadius: 0.008, density: 1500, tolerance: { density: 0.03 } };
+const HOOP: DraftPrimitive = {
+  id: 'hoop',
+  shape: 'torus',
+  majorRadius: 0.12,
+  minorRadius: 0.008,
+  density: 1500,
+  tolerance: { density: 0.03 },
+};
 const TIP: DraftPrimitive = { id: 'tip', shape: 'point', mass: 0.012 };
 
 describe('PrimitiveForm', () => {

@@ -6,13 +6,19 @@ import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import type { Material } from '@tumblewise/shared';
 import { FieldErrorPipe } from '@tumblewise/ui';
-import type { Subscription } from 'rxjs';
+import { Subscription } from 'rxjs';
 import { issueAt, type FieldIssues } from './document-issues';
 import { MeshPicker } from './mesh-picker';
 import { meshReferenceProblem } from './mesh-picker-model';
 import type { DraftPrimitive } from './draft-document';
 import { SHAPE_FIELDS, shapeLabel, type DimensionField } from './primitive-fields';
-import { formValueToPrimitive, numericControls, primitiveToFormValue, type NumericControl, type PrimitiveFormValue } from './primitive-form-model';
+import {
+  formValueToPrimitive,
+  numericControls,
+  primitiveToFormValue,
+  type NumericControl,
+  type PrimitiveFormValue,
+} from './primitive-form-model';
 import { densityDefaultHint, hasSizeTolerance, toleranceToForm, withTolerance } from './tolerance-fields';
 
 /** A change the form made to its primitive, and the form control that made it. */
@@ -36,7 +42,21 @@ const isToleranceControl = (name: string): name is ToleranceControl => name in T
 @Component({
   selector: 'tw-primitive-form',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatError, MatHint, MatSuffix, MatInput, MatSelect, MatOption, MatButtonToggleGroup, MatButtonToggle, FieldErrorPipe, MeshPicker],
+  imports: [
+    ReactiveFormsModule,
+    MatFormField,
+    MatLabel,
+    MatError,
+    MatHint,
+    MatSuffix,
+    MatInput,
+    MatSelect,
+    MatOption,
+    MatButtonToggleGroup,
+    MatButtonToggle,
+    FieldErrorPipe,
+    MeshPicker,
+  ],
   templateUrl: './primitive-form.html',
   styleUrl: './primitive-form.scss',
 })
@@ -56,7 +76,7 @@ export class PrimitiveForm {
   /** Emitted with the primitive (SI) after each edit. */
   readonly changed = output<PrimitiveChange>();
   /** Emitted when a field loses focus (ends one undo step). */
-  readonly editEnded = output<void>();
+  readonly editEnded = output();
 
   protected readonly form = signal(new FormGroup<Record<string, FormControl<string | number | null>>>({}));
   protected readonly numeric = signal<NumericControl[]>([]);
@@ -74,7 +94,9 @@ export class PrimitiveForm {
   /** What an empty density (mass) scatter stands for. */
   protected readonly toleranceHint = computed(() => densityDefaultHint(this.primitive(), this.materials()));
   /** The tolerance fields' problems in words (the schema's or the server's). */
-  protected readonly toleranceDensityError = computed(() => `${this.isPoint() ? 'Mass' : 'Density'} scatter ${this.toleranceIssue('toleranceDensity') ?? ''}`);
+  protected readonly toleranceDensityError = computed(
+    () => `${this.isPoint() ? 'Mass' : 'Density'} scatter ${this.toleranceIssue('toleranceDensity') ?? ''}`,
+  );
   protected readonly toleranceSizeError = computed(() => `Dimension scatter ${this.toleranceIssue('toleranceSize') ?? ''}`);
   /** A problem with the mesh reference (document check or server), for the mesh picker. */
   protected readonly meshProblem = computed(() => {
@@ -136,7 +158,8 @@ export class PrimitiveForm {
     this.subscription?.unsubscribe();
     const value = primitiveToFormValue(primitive);
     const controls: Record<string, FormControl<string | number | null>> = {};
-    for (const [name, v] of Object.entries(value)) controls[name] = new FormControl<string | number | null>({ value: v, disabled: readonly });
+    for (const [name, v] of Object.entries(value))
+      controls[name] = new FormControl<string | number | null>({ value: v, disabled: readonly });
     const tolerance = toleranceToForm(primitive);
     controls['toleranceDensity'] = this.toleranceControl('toleranceDensity', tolerance.densityPercent, readonly);
     if (hasSizeTolerance(primitive.shape)) controls['toleranceSize'] = this.toleranceControl('toleranceSize', tolerance.sizeMm, readonly);
@@ -148,7 +171,7 @@ export class PrimitiveForm {
     for (const [name, control] of Object.entries(controls)) {
       subs.push(control.valueChanges.subscribe(() => this.emitChange(form, name)));
     }
-    this.subscription = { unsubscribe: () => subs.forEach((s) => s.unsubscribe()) } as Subscription;
+    this.subscription = new Subscription(() => subs.forEach((s) => s.unsubscribe()));
     this.applyIssues(form, this.issues(), this.index());
   }
 
@@ -157,7 +180,9 @@ export class PrimitiveForm {
    * control's own checks as the designer types do not clear it before the document is checked again.
    */
   private toleranceControl(name: ToleranceControl, value: number | null, readonly: boolean): FormControl<string | number | null> {
-    return new FormControl<string | number | null>({ value, disabled: readonly }, () => (this.toleranceIssue(name) ? { rule: true } : null));
+    return new FormControl<string | number | null>({ value, disabled: readonly }, () =>
+      this.toleranceIssue(name) ? { rule: true } : null,
+    );
   }
 
   private toleranceIssue(name: ToleranceControl): string | null {
@@ -168,7 +193,10 @@ export class PrimitiveForm {
     const value = form.getRawValue() as PrimitiveFormValue;
     if (isToleranceControl(field)) {
       // Number inputs give a number, or null when empty.
-      const tolerance = { densityPercent: (value['toleranceDensity'] ?? null) as number | null, sizeMm: (value['toleranceSize'] ?? null) as number | null };
+      const tolerance = {
+        densityPercent: (value['toleranceDensity'] ?? null) as number | null,
+        sizeMm: (value['toleranceSize'] ?? null) as number | null,
+      };
       this.changed.emit({ primitive: withTolerance(this.primitive(), tolerance), field: TOLERANCE_CONTROLS[field] });
       return;
     }
@@ -178,7 +206,16 @@ export class PrimitiveForm {
 
   private applyIssues(form: FormGroup<Record<string, FormControl<string | number | null>>>, issues: FieldIssues, index: number): void {
     const prefix = `primitives[${index}].`;
-    const pathOf: Record<string, string> = { id: 'id', materialId: 'materialId', density: 'density', mass: 'mass', meshId: 'meshId', scale: 'scale', mode: 'mode', ...TOLERANCE_CONTROLS };
+    const pathOf: Record<string, string> = {
+      id: 'id',
+      materialId: 'materialId',
+      density: 'density',
+      mass: 'mass',
+      meshId: 'meshId',
+      scale: 'scale',
+      mode: 'mode',
+      ...TOLERANCE_CONTROLS,
+    };
     for (const c of this.numeric()) pathOf[c.name] = c.path;
     for (const [name, control] of Object.entries(form.controls)) {
       const path = pathOf[name];

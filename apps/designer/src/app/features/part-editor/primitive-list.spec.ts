@@ -22,7 +22,8 @@ describe('PrimitiveList', () => {
     await fixture.whenStable();
     const host: HTMLElement = fixture.nativeElement;
     const rowButton = (i: number) => host.querySelectorAll<HTMLElement>('[data-testid="primitive-select"]')[i];
-    const key = (i: number, k: string, altKey = false) => rowButton(i).dispatchEvent(new KeyboardEvent('keydown', { key: k, altKey, bubbles: true }));
+    const key = (i: number, k: string, altKey = false) =>
+      rowButton(i).dispatchEvent(new KeyboardEvent('keydown', { key: k, altKey, bubbles: true }));
     return { fixture, host, moves, selections, key };
   }
 

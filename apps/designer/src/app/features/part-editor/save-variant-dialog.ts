@@ -25,7 +25,19 @@ const rules = createVariantBodySchema.shape;
 @Component({
   selector: 'tw-save-variant-dialog',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, MatDialogTitle, MatDialogContent, MatDialogActions, MatFormField, MatLabel, MatError, MatHint, MatInput, MatButton, FieldErrorPipe],
+  imports: [
+    ReactiveFormsModule,
+    MatDialogTitle,
+    MatDialogContent,
+    MatDialogActions,
+    MatFormField,
+    MatLabel,
+    MatError,
+    MatHint,
+    MatInput,
+    MatButton,
+    FieldErrorPipe,
+  ],
   template: `
     <h2 mat-dialog-title>Save as variant {{ data.nextNumber }}</h2>
     <form [formGroup]="form" (ngSubmit)="save()" novalidate>

@@ -11,7 +11,12 @@ import { SignOffPanel } from '../sign-off/sign-off-panel';
   changeDetection: ChangeDetectionStrategy.OnPush,
   imports: [SignOffPanel],
   template: `
-    <section class="tw-sign-off-slot" [attr.aria-label]="'Sign-off of variant ' + (variantNumber() ?? '')" data-testid="sign-off-slot" [attr.data-variant-id]="variantId()">
+    <section
+      class="tw-sign-off-slot"
+      [attr.aria-label]="'Sign-off of variant ' + (variantNumber() ?? '')"
+      data-testid="sign-off-slot"
+      [attr.data-variant-id]="variantId()"
+    >
       @defer (on viewport; when reveal()) {
         <tw-sign-off-panel [variantId]="variantId()" (statusChanged)="statusChanged.emit($event)" />
       } @placeholder {

@@ -6,8 +6,22 @@ import { densityDefaultHint, hasSizeTolerance, toleranceToForm, withTolerance } 
 
 // Conversions checked against mathjs's unit system (1 mm = 0.001 m, SI Brochure) and the plain
 // definition of per cent (1 % = 0.01).
-const GRIP: DraftPrimitive = { id: 'grip', shape: 'cylinder', radius: 0.0135, length: 0.19, density: 650, tolerance: { density: 0.04, size: 0.0002 } };
-const ASH: Material = { id: 'ash', name: 'Ash (white)', density: 670, densityTolerance: 0.08, source: 'Wood Handbook', workspaceId: null } as unknown as Material;
+const GRIP: DraftPrimitive = {
+  id: 'grip',
+  shape: 'cylinder',
+  radius: 0.0135,
+  length: 0.19,
+  density: 650,
+  tolerance: { density: 0.04, size: 0.0002 },
+};
+const ASH: Material = {
+  id: 'ash',
+  name: 'Ash (white)',
+  density: 670,
+  densityTolerance: 0.08,
+  source: 'Wood Handbook',
+  workspaceId: null,
+} as unknown as Material;
 
 describe('tolerance fields of the editor', () => {
   it('shows a relative density as per cent and a size in metres as millimetres', () => {

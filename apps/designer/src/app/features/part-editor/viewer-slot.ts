@@ -33,7 +33,12 @@ function workspaceMeshSource(): MeshGeometrySource {
     <section class="tw-viewer-slot" aria-label="3-D view" data-testid="viewer-slot">
       @defer (on viewport) {
         @if (document() && report()) {
-          <tw-part-viewer [document]="document()!" [report]="report()!" [workspaceId]="workspaceId()" (uploadedMeshes)="meshes.set($event)" />
+          <tw-part-viewer
+            [document]="document()!"
+            [report]="report()!"
+            [workspaceId]="workspaceId()"
+            (uploadedMeshes)="meshes.set($event)"
+          />
           @for (f of meshes().failed; track f.id) {
             <p class="tw-mesh-note" role="status" data-testid="viewer-mesh-note">
               The uploaded mesh “{{ f.id }}” is not drawn ({{ f.message }}); the spin report still counts it.

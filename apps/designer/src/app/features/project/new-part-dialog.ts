@@ -20,7 +20,19 @@ export interface NewPartDialogData {
 @Component({
   selector: 'tw-new-part-dialog',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, MatDialogTitle, MatDialogContent, MatDialogActions, MatFormField, MatLabel, MatError, MatInput, MatButton, ErrorBanner, FieldErrorPipe],
+  imports: [
+    ReactiveFormsModule,
+    MatDialogTitle,
+    MatDialogContent,
+    MatDialogActions,
+    MatFormField,
+    MatLabel,
+    MatError,
+    MatInput,
+    MatButton,
+    ErrorBanner,
+    FieldErrorPipe,
+  ],
   template: `
     <h2 mat-dialog-title>New part</h2>
     <form [formGroup]="form" (ngSubmit)="createPart()" novalidate>
@@ -35,7 +47,9 @@ export interface NewPartDialogData {
       </mat-dialog-content>
       <mat-dialog-actions align="end">
         <button mat-button type="button" (click)="cancel()">Cancel</button>
-        <button mat-flat-button type="submit" [disabled]="submitting()" data-testid="part-create">{{ submitting() ? 'Creating…' : 'Create part' }}</button>
+        <button mat-flat-button type="submit" [disabled]="submitting()" data-testid="part-create">
+          {{ submitting() ? 'Creating…' : 'Create part' }}
+        </button>
       </mat-dialog-actions>
     </form>
   `,

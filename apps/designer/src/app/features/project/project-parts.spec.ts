@@ -9,14 +9,45 @@ import { Confirmation } from '@tumblewise/ui';
 import { of } from 'rxjs';
 import { ProjectParts } from './project-parts';
 
-const WORKSPACE = { id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b', name: 'Harbour Street Gear Lab', state: 'active' as const, createdAt: '2026-11-02T09:00:00.000Z' };
+const WORKSPACE = {
+  id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b',
+  name: 'Harbour Street Gear Lab',
+  state: 'active' as const,
+  createdAt: '2026-11-02T09:00:00.000Z',
+};
 const BASE = `/api/v1/workspaces/${WORKSPACE.id}`;
 // Invented project and parts.
-const PROJECT: Project = { id: '40000000-0000-4000-8000-000000000001', name: 'Junior racket', category: 'racket', notes: 'Lighter frame', archived: false, createdAt: WORKSPACE.createdAt, updatedAt: WORKSPACE.createdAt };
+const PROJECT: Project = {
+  id: '40000000-0000-4000-8000-000000000001',
+  name: 'Junior racket',
+  category: 'racket',
+  notes: 'Lighter frame',
+  archived: false,
+  createdAt: WORKSPACE.createdAt,
+  updatedAt: WORKSPACE.createdAt,
+};
 const part = (n: number, name: string, latest: Part['latestVariant'], variantCount: number): Part => ({
-  id: `50000000-0000-4000-8000-00000000000${n}`, projectId: PROJECT.id, name, draft: {}, draftVersion: 1, latestVariant: latest, variantCount, createdAt: WORKSPACE.createdAt, updatedAt: WORKSPACE.createdAt,
+  id: `50000000-0000-4000-8000-00000000000${n}`,
+  projectId: PROJECT.id,
+  name,
+  draft: {},
+  draftVersion: 1,
+  latestVariant: latest,
+  variantCount,
+  createdAt: WORKSPACE.createdAt,
+  updatedAt: WORKSPACE.createdAt,
 });
-const FRAME = part(1, 'Frame', { id: '60000000-0000-4000-8000-000000000001', number: 3, status: 'in_review', summary: { verdict: 'flip-prone', nearestAxis: 'intermediate', mass: 0.25 } }, 3);
+const FRAME = part(
+  1,
+  'Frame',
+  {
+    id: '60000000-0000-4000-8000-000000000001',
+    number: 3,
+    status: 'in_review',
+    summary: { verdict: 'flip-prone', nearestAxis: 'intermediate', mass: 0.25 },
+  },
+  3,
+);
 const BUMPER = part(2, 'Bumper', null, 0);
 
 describe('ProjectParts', () => {
@@ -37,8 +68,15 @@ describe('ProjectParts', () => {
       ],
     });
     TestBed.inject(AuthState).setSession({
-      accessToken: 'token-one', expiresIn: 900,
-      user: { id: '10000000-0000-4000-8000-000000000001', email: 'mira.okafor@example.test', name: 'Mira Okafor', isOperator: false, createdAt: WORKSPACE.createdAt },
+      accessToken: 'token-one',
+      expiresIn: 900,
+      user: {
+        id: '10000000-0000-4000-8000-000000000001',
+        email: 'mira.okafor@example.test',
+        name: 'Mira Okafor',
+        isOperator: false,
+        createdAt: WORKSPACE.createdAt,
+      },
       memberships: [{ workspace: WORKSPACE, role }],
     });
     backend = TestBed.inject(HttpTestingController);
@@ -67,7 +105,9 @@ describe('ProjectParts', () => {
   it('deletes a part after confirmation', async () => {
     await openAs('designer', [FRAME, BUMPER]);
     (host.querySelectorAll('[data-testid="part-delete"]')[1] as HTMLElement).click();
-    backend.expectOne((r) => r.method === 'DELETE' && r.url === `${BASE}/parts/${BUMPER.id}`).flush(null, { status: 204, statusText: 'No Content' });
+    backend
+      .expectOne((r) => r.method === 'DELETE' && r.url === `${BASE}/parts/${BUMPER.id}`)
+      .flush(null, { status: 204, statusText: 'No Content' });
     await fixture.whenStable();
     expect(host.querySelectorAll('[data-testid="part-row"]')).toHaveLength(1);
   });

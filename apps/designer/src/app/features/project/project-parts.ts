@@ -17,7 +17,20 @@ import { NewPartDialog, type NewPartDialogData } from './new-part-dialog';
 @Component({
   selector: 'tw-project-parts',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [DatePipe, RouterLink, MatButton, MatIconButton, MatTooltip, PageHeader, Breadcrumbs, EmptyState, ErrorBanner, LoadingState, VerdictChip, StatusChip],
+  imports: [
+    DatePipe,
+    RouterLink,
+    MatButton,
+    MatIconButton,
+    MatTooltip,
+    PageHeader,
+    Breadcrumbs,
+    EmptyState,
+    ErrorBanner,
+    LoadingState,
+    VerdictChip,
+    StatusChip,
+  ],
   templateUrl: './project-parts.html',
   styleUrl: './project-parts.scss',
 })
@@ -37,9 +50,18 @@ export class ProjectParts {
     const workspaceId = this.workspace.workspaceId();
     return workspaceId ? { workspaceId, projectId: this.projectId() } : undefined;
   });
-  protected readonly project = rxResource({ params: this.scope, stream: ({ params }) => this.projectsApi.get(params.workspaceId, params.projectId) });
-  protected readonly crumbs = computed((): Crumb[] => [{ label: 'Projects', link: '/', testId: 'crumb-projects' }, { label: this.project.value()?.name ?? 'Project' }]);
-  protected readonly parts = rxResource({ params: this.scope, stream: ({ params }) => this.partsApi.list(params.workspaceId, params.projectId) });
+  protected readonly project = rxResource({
+    params: this.scope,
+    stream: ({ params }) => this.projectsApi.get(params.workspaceId, params.projectId),
+  });
+  protected readonly crumbs = computed((): Crumb[] => [
+    { label: 'Projects', link: '/', testId: 'crumb-projects' },
+    { label: this.project.value()?.name ?? 'Project' },
+  ]);
+  protected readonly parts = rxResource({
+    params: this.scope,
+    stream: ({ params }) => this.partsApi.list(params.workspaceId, params.projectId),
+  });
   protected readonly loadError = computed(() => {
     const error = this.project.error() ?? this.parts.error();
     return error ? toApiError(error).message : null;

@@ -22,7 +22,21 @@ const rules = updateProjectBodySchema.shape;
 @Component({
   selector: 'tw-edit-project-dialog',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, MatDialogTitle, MatDialogContent, MatDialogActions, MatFormField, MatLabel, MatError, MatInput, MatSelect, MatOption, MatButton, ErrorBanner, FieldErrorPipe],
+  imports: [
+    ReactiveFormsModule,
+    MatDialogTitle,
+    MatDialogContent,
+    MatDialogActions,
+    MatFormField,
+    MatLabel,
+    MatError,
+    MatInput,
+    MatSelect,
+    MatOption,
+    MatButton,
+    ErrorBanner,
+    FieldErrorPipe,
+  ],
   template: `
     <h2 mat-dialog-title>Edit project</h2>
     <form [formGroup]="form" (ngSubmit)="saveProject()" novalidate>
@@ -51,7 +65,9 @@ const rules = updateProjectBodySchema.shape;
       </mat-dialog-content>
       <mat-dialog-actions align="end">
         <button mat-button type="button" (click)="cancel()">Cancel</button>
-        <button mat-flat-button type="submit" [disabled]="submitting()" data-testid="edit-project-save">{{ submitting() ? 'Saving…' : 'Save' }}</button>
+        <button mat-flat-button type="submit" [disabled]="submitting()" data-testid="edit-project-save">
+          {{ submitting() ? 'Saving…' : 'Save' }}
+        </button>
       </mat-dialog-actions>
     </form>
   `,

@@ -66,7 +66,11 @@ export class NewProjectDialog {
     const { name, category, notes } = this.form.getRawValue();
     this.submitting.set(true);
     this.projectsApi
-      .create(this.data.workspaceId, { name: name.trim(), category: category as GearCategory, ...(notes.trim() ? { notes: notes.trim() } : {}) })
+      .create(this.data.workspaceId, {
+        name: name.trim(),
+        category: category as GearCategory,
+        ...(notes.trim() ? { notes: notes.trim() } : {}),
+      })
       .subscribe({
         next: (project) => {
           this.submitting.set(false);

@@ -3,7 +3,13 @@ import { projectMatchesFilter, projectSortValue, visibleProjects } from './proje
 
 // Invented projects.
 const project = (name: string, category: Project['category'], updatedAt: string, archived = false, notes = ''): Project => ({
-  id: `40000000-0000-4000-8000-${name.length.toString().padStart(12, '0')}`, name, category, notes, archived, createdAt: updatedAt, updatedAt,
+  id: `40000000-0000-4000-8000-${name.length.toString().padStart(12, '0')}`,
+  name,
+  category,
+  notes,
+  archived,
+  createdAt: updatedAt,
+  updatedAt,
 });
 const DISC = project('Flying disc 175 g', 'flying-disc', '2026-11-20T09:00:00.000Z', false, 'Rim-weighted');
 const BATON = project('Juggling baton', 'juggling', '2026-11-25T09:00:00.000Z', true);
@@ -19,7 +25,9 @@ describe('project table helpers', () => {
   });
 
   it('sorts names without case, categories by label and updates by date', () => {
-    const byName = [DISC, BATON, RACKET].sort((a, b) => String(projectSortValue(a, 'name')).localeCompare(String(projectSortValue(b, 'name'))));
+    const byName = [DISC, BATON, RACKET].sort((a, b) =>
+      String(projectSortValue(a, 'name')).localeCompare(String(projectSortValue(b, 'name'))),
+    );
     expect(byName.map((p) => p.name)).toEqual(['apex racket', 'Flying disc 175 g', 'Juggling baton']);
     expect(projectSortValue(BATON, 'updated')).toBeGreaterThan(projectSortValue(RACKET, 'updated') as number);
     expect(projectSortValue(BATON, 'category')).toBe('juggling club or baton');

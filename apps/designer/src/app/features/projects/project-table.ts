@@ -5,7 +5,9 @@ import { CATEGORY_LABELS } from './category-labels';
 export function projectMatchesFilter(project: Project, filter: string): boolean {
   const needle = filter.trim().toLowerCase();
   if (!needle) return true;
-  return [project.name, CATEGORY_LABELS[project.category] ?? project.category, project.notes].some((value) => value.toLowerCase().includes(needle));
+  return [project.name, CATEGORY_LABELS[project.category] ?? project.category, project.notes].some((value) =>
+    value.toLowerCase().includes(needle),
+  );
 }
 
 /** The value a column sorts by: names without case, categories by their label, updates by date. */

@@ -9,7 +9,12 @@ import { AuthState, authInterceptor, errorInterceptor } from '@tumblewise/api-cl
 import type { Project, Role } from '@tumblewise/shared';
 import { Projects } from './projects';
 
-const WORKSPACE = { id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b', name: 'Harbour Street Gear Lab', state: 'active' as const, createdAt: '2026-11-02T09:00:00.000Z' };
+const WORKSPACE = {
+  id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b',
+  name: 'Harbour Street Gear Lab',
+  state: 'active' as const,
+  createdAt: '2026-11-02T09:00:00.000Z',
+};
 const URL = `/api/v1/workspaces/${WORKSPACE.id}/projects`;
 
 const JAVELIN: Project = {
@@ -42,7 +47,13 @@ describe('Projects', () => {
     TestBed.inject(AuthState).setSession({
       accessToken: 'token-one',
       expiresIn: 900,
-      user: { id: '10000000-0000-4000-8000-000000000001', email: 'mira.okafor@example.test', name: 'Mira Okafor', isOperator: false, createdAt: WORKSPACE.createdAt },
+      user: {
+        id: '10000000-0000-4000-8000-000000000001',
+        email: 'mira.okafor@example.test',
+        name: 'Mira Okafor',
+        isOperator: false,
+        createdAt: WORKSPACE.createdAt,
+      },
       memberships: [{ workspace: WORKSPACE, role }],
     });
     backend = TestBed.inject(HttpTestingController);
@@ -106,8 +117,21 @@ describe('Projects', () => {
   });
 
   describe('the table', () => {
-    const RACKET: Project = { ...JAVELIN, id: '40000000-0000-4000-8000-000000000002', name: 'Junior racket', category: 'racket', updatedAt: '2026-11-24T09:00:00.000Z' };
-    const DISC: Project = { ...JAVELIN, id: '40000000-0000-4000-8000-000000000003', name: 'Flying disc 175 g', category: 'flying-disc', archived: true, updatedAt: '2026-11-23T09:00:00.000Z' };
+    const RACKET: Project = {
+      ...JAVELIN,
+      id: '40000000-0000-4000-8000-000000000002',
+      name: 'Junior racket',
+      category: 'racket',
+      updatedAt: '2026-11-24T09:00:00.000Z',
+    };
+    const DISC: Project = {
+      ...JAVELIN,
+      id: '40000000-0000-4000-8000-000000000003',
+      name: 'Flying disc 175 g',
+      category: 'flying-disc',
+      archived: true,
+      updatedAt: '2026-11-23T09:00:00.000Z',
+    };
     const names = () => Array.from(host.querySelectorAll('[data-testid="project-link"]')).map((a) => a.textContent!.trim());
 
     async function type(testId: string, text: string): Promise<void> {

@@ -58,7 +58,9 @@ export class Projects {
     return error ? toApiError(error).message : null;
   });
   protected readonly mayCreate = computed(() => this.workspace.can('projects.edit'));
-  protected readonly columns = computed(() => (this.mayCreate() ? ['name', 'category', 'updated', 'actions'] : ['name', 'category', 'updated']));
+  protected readonly columns = computed(() =>
+    this.mayCreate() ? ['name', 'category', 'updated', 'actions'] : ['name', 'category', 'updated'],
+  );
   protected readonly filterText = signal('');
   protected readonly showArchived = signal(false);
   protected readonly archivedCount = computed(() => (this.projects.value() ?? []).filter((p) => p.archived).length);

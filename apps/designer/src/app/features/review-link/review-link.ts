@@ -74,7 +74,10 @@ export class ReviewLink {
             return;
           }
           if (place.workspaceId !== this.workspace.workspaceId()) this.workspace.select(place.workspaceId);
-          void this.router.navigate(['/projects', place.projectId, 'parts', place.partId], { queryParams: { variant: place.variantId, panel: 'review' }, replaceUrl: true });
+          void this.router.navigate(['/projects', place.projectId, 'parts', place.partId], {
+            queryParams: { variant: place.variantId, panel: 'review' },
+            replaceUrl: true,
+          });
         },
         error: (error: unknown) => this.failure.set(toApiError(error).message),
       });
@@ -94,7 +97,11 @@ export class ReviewLink {
         ),
       ),
       take(1),
-      switchMap(({ workspaceId, variant }) => this.partsApi.get(workspaceId, variant.partId).pipe(map((part) => ({ workspaceId, projectId: part.projectId, partId: part.id, variantId: variant.id })))),
+      switchMap(({ workspaceId, variant }) =>
+        this.partsApi
+          .get(workspaceId, variant.partId)
+          .pipe(map((part) => ({ workspaceId, projectId: part.projectId, partId: part.id, variantId: variant.id }))),
+      ),
       defaultIfEmpty(null),
       catchError((error: unknown) => (toApiError(error).status === 404 ? of(null) : throwError(() => error))),
     );

@@ -22,14 +22,27 @@ export function histogramOptions(d: Distribution, axis: HistogramAxis, nominal: 
   const labels = centres.map(short);
   const total = counts.reduce((a, b) => a + b, 0);
   // The nominal value's bin, for the marker line on the category axis.
-  const nominalBin = nominal === null || width === 0 ? null : Math.min(counts.length - 1, Math.max(0, Math.floor((nominal - from) / width)));
+  const nominalBin =
+    nominal === null || width === 0 ? null : Math.min(counts.length - 1, Math.max(0, Math.floor((nominal - from) / width)));
   return {
     animation: false,
     textStyle: CHART_TEXT,
-    aria: { enabled: true, label: { description: `Histogram of ${axis.title} over ${total} samples, from ${short(axis.convert(from))} to ${short(axis.convert(to))} ${axis.unit}; the middle 90 % lie between ${short(axis.convert(d.p05))} and ${short(axis.convert(d.p95))} ${axis.unit}.` } },
+    aria: {
+      enabled: true,
+      label: {
+        description: `Histogram of ${axis.title} over ${total} samples, from ${short(axis.convert(from))} to ${short(axis.convert(to))} ${axis.unit}; the middle 90 % lie between ${short(axis.convert(d.p05))} and ${short(axis.convert(d.p95))} ${axis.unit}.`,
+      },
+    },
     grid: { left: 56, right: 16, top: 24, bottom: 52 },
     tooltip: { trigger: 'axis', axisPointer: { type: 'shadow' } },
-    xAxis: { type: 'category', data: labels, name: `${axis.title} (${axis.unit})`, nameLocation: 'middle', nameGap: 32, axisLabel: { ...CHART_TEXT, hideOverlap: true } },
+    xAxis: {
+      type: 'category',
+      data: labels,
+      name: `${axis.title} (${axis.unit})`,
+      nameLocation: 'middle',
+      nameGap: 32,
+      axisLabel: { ...CHART_TEXT, hideOverlap: true },
+    },
     yAxis: { type: 'value', name: 'samples', axisLabel: CHART_TEXT, minInterval: 1 },
     series: [
       {
@@ -38,7 +51,17 @@ export function histogramOptions(d: Distribution, axis: HistogramAxis, nominal: 
         barCategoryGap: '8%',
         color: colour,
         data: counts,
-        ...(nominalBin !== null ? { markLine: { symbol: 'none', silent: true, lineStyle: { type: 'dashed', color: '#263238' }, label: { formatter: 'nominal', color: CHART_TEXT.color }, data: [{ xAxis: labels[nominalBin] }] } } : {}),
+        ...(nominalBin !== null
+          ? {
+              markLine: {
+                symbol: 'none',
+                silent: true,
+                lineStyle: { type: 'dashed', color: '#263238' },
+                label: { formatter: 'nominal', color: CHART_TEXT.color },
+                data: [{ xAxis: labels[nominalBin] }],
+              },
+            }
+          : {}),
       },
     ],
   };

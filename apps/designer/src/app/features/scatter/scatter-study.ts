@@ -1,5 +1,17 @@
 import { PercentPipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, computed, DestroyRef, effect, ElementRef, inject, InjectionToken, input, signal, untracked } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  DestroyRef,
+  effect,
+  ElementRef,
+  inject,
+  InjectionToken,
+  input,
+  signal,
+  untracked,
+} from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { FormArray, FormControl, FormGroup, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatAnchor, MatButton } from '@angular/material/button';
@@ -10,7 +22,16 @@ import { RouterLink } from '@angular/router';
 import { MaterialsApi, ScatterApi, toApiError, WorkspaceContext } from '@tumblewise/api-client';
 import type { ScatterResult, Sensitivity } from '@tumblewise/engine';
 import type { PartDocument, ScatterStudy as Study } from '@tumblewise/shared';
-import { applyServerError, EmptyState, ErrorBanner, FieldErrorPipe, focusFirstInvalid, LoadingState, PageHeader, VerdictChip } from '@tumblewise/ui';
+import {
+  applyServerError,
+  EmptyState,
+  ErrorBanner,
+  FieldErrorPipe,
+  focusFirstInvalid,
+  LoadingState,
+  PageHeader,
+  VerdictChip,
+} from '@tumblewise/ui';
 import { provideCharts, SERIES_COLOURS, VIEWER_COLOURS } from '@tumblewise/viewer';
 import { NgxEchartsDirective } from 'ngx-echarts';
 import { defer, repeat, takeWhile, type Subscription } from 'rxjs';
@@ -24,7 +45,13 @@ import { defaultTolerances, SAMPLE_LIMITS, TOLERANCE_LIMITS, tolerancesBody, typ
 export const SCATTER_POLL_MS = new InjectionToken<number>('SCATTER_POLL_MS', { providedIn: 'root', factory: () => 1000 });
 
 const FINISHED = new Set<Study['state']>(['done', 'failed', 'cancelled']);
-const STATE_WORDS: Record<Study['state'], string> = { queued: 'Waiting for a worker', running: 'Running', done: 'Done', failed: 'Failed', cancelled: 'Cancelled' };
+const STATE_WORDS: Record<Study['state'], string> = {
+  queued: 'Waiting for a worker',
+  running: 'Running',
+  done: 'Done',
+  failed: 'Failed',
+  cancelled: 'Cancelled',
+};
 /** Sensitivity rows shown (the ranking's head). */
 const RANKING_ROWS = 8;
 
@@ -32,7 +59,13 @@ const RANKING_ROWS = 8;
 export function parameterLabel(name: string): string {
   const m = /^(\w+)\[(\d)\]$/.exec(name);
   if (m) return `${m[1] === 'semiAxes' ? 'semi-axis' : m[1]} ${['x', 'y', 'z'][Number(m[2])] ?? m[2]}`;
-  const words: Record<string, string> = { innerRadius: 'inner radius', topRadius: 'top radius', majorRadius: 'major radius', minorRadius: 'minor radius', wall: 'wall thickness' };
+  const words: Record<string, string> = {
+    innerRadius: 'inner radius',
+    topRadius: 'top radius',
+    majorRadius: 'major radius',
+    minorRadius: 'minor radius',
+    wall: 'wall thickness',
+  };
   return words[name] ?? name;
 }
 
@@ -106,10 +139,15 @@ export class ScatterStudyPage {
   /** The part, its variants and the studied one (of `?variant=`, else the newest). */
   private readonly page = partPage({ projectId: this.projectId, partId: this.partId, variant: this.variant });
   protected readonly part = this.page.part;
-  protected readonly crumbs = computed(() => partTrail(this.projectId(), this.page.project.value()?.name, this.partId(), this.part.value()?.name, 'Scatter study'));
+  protected readonly crumbs = computed(() =>
+    partTrail(this.projectId(), this.page.project.value()?.name, this.partId(), this.part.value()?.name, 'Scatter study'),
+  );
   protected readonly chosen = this.page.chosen;
   protected readonly variantLabel = variantLabel;
-  private readonly materials = rxResource({ params: () => this.workspace.workspaceId() ?? undefined, stream: ({ params }) => this.materialsApi.list(params) });
+  private readonly materials = rxResource({
+    params: () => this.workspace.workspaceId() ?? undefined,
+    stream: ({ params }) => this.materialsApi.list(params),
+  });
 
   protected readonly loadError = computed(() => {
     const error = this.materials.error();
@@ -125,7 +163,12 @@ export class ScatterStudyPage {
 
   protected readonly form = this.fb.group({
     tolerances: new FormArray<ToleranceGroup>([]),
-    samples: this.fb.control<number | null>(SAMPLE_LIMITS.default, [Validators.required, Validators.min(SAMPLE_LIMITS.min), Validators.max(SAMPLE_LIMITS.max), wholeNumber]),
+    samples: this.fb.control<number | null>(SAMPLE_LIMITS.default, [
+      Validators.required,
+      Validators.min(SAMPLE_LIMITS.min),
+      Validators.max(SAMPLE_LIMITS.max),
+      wholeNumber,
+    ]),
     seed: this.fb.control<number | null>(null, [Validators.min(0), Validators.max(2 ** 31 - 1), wholeNumber]),
   });
 
@@ -133,7 +176,10 @@ export class ScatterStudyPage {
   protected readonly starting = signal(false);
   protected readonly cancelling = signal(false);
   protected readonly failure = signal<string | null>(null);
-  protected readonly running = computed(() => { const s = this.study(); return !!s && !FINISHED.has(s.state); });
+  protected readonly running = computed(() => {
+    const s = this.study();
+    return !!s && !FINISHED.has(s.state);
+  });
   protected readonly result = computed(() => scatterResultOf(this.study()));
   protected readonly ranking = computed<Sensitivity[]>(() => this.result()?.sensitivities.slice(0, RANKING_ROWS) ?? []);
   protected readonly firstLever = computed(() => this.ranking()[0] ?? null);
@@ -142,13 +188,31 @@ export class ScatterStudyPage {
     if (!r) return [];
     const margin = (si: number) => si * 100;
     const items = [
-      { key: 'marginMajor', title: 'Margin (I1−I2)/I2', unit: '%', convert: margin, nominal: r.nominal.margins.major, colour: VIEWER_COLOURS.major },
-      { key: 'marginMinor', title: 'Margin (I2−I3)/I2', unit: '%', convert: margin, nominal: r.nominal.margins.minor, colour: VIEWER_COLOURS.minor },
+      {
+        key: 'marginMajor',
+        title: 'Margin (I1−I2)/I2',
+        unit: '%',
+        convert: margin,
+        nominal: r.nominal.margins.major,
+        colour: VIEWER_COLOURS.major,
+      },
+      {
+        key: 'marginMinor',
+        title: 'Margin (I2−I3)/I2',
+        unit: '%',
+        convert: margin,
+        nominal: r.nominal.margins.minor,
+        colour: VIEWER_COLOURS.minor,
+      },
       { key: 'mass', title: 'Mass', unit: 'g', convert: (si: number) => si * 1000, nominal: null, colour: SERIES_COLOURS[0] },
     ];
     return items
       .filter((h) => r.distributions[h.key])
-      .map((h) => ({ ...h, distribution: r.distributions[h.key], options: histogramOptions(r.distributions[h.key], h, h.nominal, h.colour) }));
+      .map((h) => ({
+        ...h,
+        distribution: r.distributions[h.key],
+        options: histogramOptions(r.distributions[h.key], h, h.nominal, h.colour),
+      }));
   });
 
   private poller: Subscription | null = null;
@@ -183,18 +247,25 @@ export class ScatterStudyPage {
     });
     const { samples, seed } = this.form.getRawValue();
     this.starting.set(true);
-    this.scatterApi.start(workspaceId, { variantId: variant.id, tolerances: tolerancesBody(rows), samples: samples!, ...(seed !== null ? { seed } : {}) }).subscribe({
-      next: (study) => {
-        this.starting.set(false);
-        this.study.set(study);
-        if (!FINISHED.has(study.state)) this.follow(workspaceId, study.id);
-      },
-      error: (error: unknown) => {
-        this.starting.set(false);
-        const fault = toApiError(error);
-        if (!applyServerError(this.form, fault, this.fieldAliases())) this.failure.set(fault.message);
-      },
-    });
+    this.scatterApi
+      .start(workspaceId, {
+        variantId: variant.id,
+        tolerances: tolerancesBody(rows),
+        samples: samples!,
+        ...(seed !== null ? { seed } : {}),
+      })
+      .subscribe({
+        next: (study) => {
+          this.starting.set(false);
+          this.study.set(study);
+          if (!FINISHED.has(study.state)) this.follow(workspaceId, study.id);
+        },
+        error: (error: unknown) => {
+          this.starting.set(false);
+          const fault = toApiError(error);
+          if (!applyServerError(this.form, fault, this.fieldAliases())) this.failure.set(fault.message);
+        },
+      });
   }
 
   /** Stops the running study. */
@@ -247,8 +318,16 @@ export class ScatterStudyPage {
     for (const r of rows) {
       array.push(
         new FormGroup({
-          densityPercent: new FormControl<number | null>(r.densityPercent, [Validators.required, Validators.min(0), Validators.max(TOLERANCE_LIMITS.densityPercent)]),
-          sizeMm: new FormControl<number | null>({ value: r.sizeMm, disabled: r.sizeMm === null }, [Validators.required, Validators.min(0), Validators.max(TOLERANCE_LIMITS.sizeMm)]),
+          densityPercent: new FormControl<number | null>(r.densityPercent, [
+            Validators.required,
+            Validators.min(0),
+            Validators.max(TOLERANCE_LIMITS.densityPercent),
+          ]),
+          sizeMm: new FormControl<number | null>({ value: r.sizeMm, disabled: r.sizeMm === null }, [
+            Validators.required,
+            Validators.min(0),
+            Validators.max(TOLERANCE_LIMITS.sizeMm),
+          ]),
         }),
       );
     }

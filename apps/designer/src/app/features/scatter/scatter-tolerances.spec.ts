@@ -2,7 +2,16 @@ import type { Material, Primitive } from '@tumblewise/shared';
 import { defaultTolerances, tolerancesBody } from './scatter-tolerances';
 
 // Invented material rows; the densities and tolerances are for the test only.
-const ASH = { id: '80000000-0000-4000-8000-000000000001', name: 'Ash (test)', family: 'wood', density: 670, densityTolerance: 0.08, source: 'test', scope: 'library', createdAt: '2026-11-02T09:00:00.000Z' } as Material;
+const ASH = {
+  id: '80000000-0000-4000-8000-000000000001',
+  name: 'Ash (test)',
+  family: 'wood',
+  density: 670,
+  densityTolerance: 0.08,
+  source: 'test',
+  scope: 'library',
+  createdAt: '2026-11-02T09:00:00.000Z',
+} as Material;
 const at = { position: [0, 0, 0], rotationDeg: [0, 0, 0], mode: 'add' } as const;
 
 describe('defaultTolerances', () => {
@@ -37,7 +46,12 @@ describe('defaultTolerances', () => {
 
 describe('tolerancesBody', () => {
   it('converts per cent and millimetres to the API’s relative density and metres', () => {
-    expect(tolerancesBody([{ primitiveId: 'grip', densityPercent: 8, sizeMm: 0.25 }, { primitiveId: 'tape', densityPercent: 5, sizeMm: null }])).toEqual({
+    expect(
+      tolerancesBody([
+        { primitiveId: 'grip', densityPercent: 8, sizeMm: 0.25 },
+        { primitiveId: 'tape', densityPercent: 5, sizeMm: null },
+      ]),
+    ).toEqual({
       grip: { density: 0.08, size: 0.00025 },
       tape: { density: 0.05 },
     });

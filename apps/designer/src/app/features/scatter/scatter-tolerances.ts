@@ -49,7 +49,9 @@ export function defaultTolerances(primitives: readonly Primitive[], materials: r
 }
 
 /** The request body's tolerances (SI: relative density, size in m) from the form's rows. */
-export function tolerancesBody(rows: readonly Pick<ToleranceRow, 'primitiveId' | 'densityPercent' | 'sizeMm'>[]): Record<string, { density: number; size?: number }> {
+export function tolerancesBody(
+  rows: readonly Pick<ToleranceRow, 'primitiveId' | 'densityPercent' | 'sizeMm'>[],
+): Record<string, { density: number; size?: number }> {
   const out: Record<string, { density: number; size?: number }> = {};
   for (const r of rows) out[r.primitiveId] = { density: r.densityPercent / 100, ...(r.sizeMm !== null ? { size: r.sizeMm / 1000 } : {}) };
   return out;

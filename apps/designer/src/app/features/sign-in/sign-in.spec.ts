@@ -10,7 +10,13 @@ import { SignIn } from './sign-in';
 const SESSION: Session = {
   accessToken: 'token-one',
   expiresIn: 900,
-  user: { id: '10000000-0000-4000-8000-000000000001', email: 'mira.okafor@example.test', name: 'Mira Okafor', isOperator: false, createdAt: '2026-11-02T09:00:00.000Z' },
+  user: {
+    id: '10000000-0000-4000-8000-000000000001',
+    email: 'mira.okafor@example.test',
+    name: 'Mira Okafor',
+    isOperator: false,
+    createdAt: '2026-11-02T09:00:00.000Z',
+  },
   memberships: [],
 };
 
@@ -67,7 +73,10 @@ describe('SignIn', () => {
     await signInWith('not the password');
     backend
       .expectOne('/api/v1/auth/signin')
-      .flush({ error: { code: 'invalid_credentials', message: 'The e-mail or the password is not right.' } }, { status: 401, statusText: 'Unauthorized' });
+      .flush(
+        { error: { code: 'invalid_credentials', message: 'The e-mail or the password is not right.' } },
+        { status: 401, statusText: 'Unauthorized' },
+      );
     await fixture.whenStable();
     expect(host.querySelector('[data-testid="error-banner"]')?.textContent).toContain('The e-mail or the password is not right.');
     expect(navigate).not.toHaveBeenCalled();

@@ -7,12 +7,22 @@ import type { Member, ReviewThread, Role, VariantStatus } from '@tumblewise/shar
 import { SignOffPanel } from './sign-off-panel';
 
 // Invented workspace and people.
-const WORKSPACE = { id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b', name: 'Harbour Street Gear Lab', state: 'active' as const, createdAt: '2026-11-02T09:00:00.000Z' };
+const WORKSPACE = {
+  id: '7f1c2a9e-3b4d-4e5f-8a6b-1c2d3e4f5a6b',
+  name: 'Harbour Street Gear Lab',
+  state: 'active' as const,
+  createdAt: '2026-11-02T09:00:00.000Z',
+};
 const VARIANT_ID = '60000000-0000-4000-8000-000000000007';
 const BASE = `/api/v1/workspaces/${WORKSPACE.id}`;
 const ME = { id: '10000000-0000-4000-8000-000000000001', name: 'Mira Okafor' };
 const member = (n: number, name: string, role: Role, userId = `20000000-0000-4000-8000-00000000000${n}`): Member => ({
-  id: `30000000-0000-4000-8000-00000000000${n}`, userId, name, email: `${name.split(' ')[0].toLowerCase()}@example.test`, role, joinedAt: WORKSPACE.createdAt,
+  id: `30000000-0000-4000-8000-00000000000${n}`,
+  userId,
+  name,
+  email: `${name.split(' ')[0].toLowerCase()}@example.test`,
+  role,
+  joinedAt: WORKSPACE.createdAt,
 });
 const MEMBERS: Member[] = [
   member(1, 'Mira Okafor', 'designer', ME.id),
@@ -22,7 +32,14 @@ const MEMBERS: Member[] = [
   member(5, 'Ada Quill', 'reviewer'),
 ];
 const thread = (status: VariantStatus, entries: ReviewThread['entries'] = []): ReviewThread => ({ status, entries });
-const REQUESTED = { id: '70000000-0000-4000-8000-000000000001', kind: 'requested' as const, author: ME, reviewer: { id: MEMBERS[4].userId, name: 'Ada Quill' }, body: 'Please check the hoop mass.', createdAt: '2026-11-23T10:00:00.000Z' };
+const REQUESTED = {
+  id: '70000000-0000-4000-8000-000000000001',
+  kind: 'requested' as const,
+  author: ME,
+  reviewer: { id: MEMBERS[4].userId, name: 'Ada Quill' },
+  body: 'Please check the hoop mass.',
+  createdAt: '2026-11-23T10:00:00.000Z',
+};
 
 describe('SignOffPanel', () => {
   let fixture: ComponentFixture<SignOffPanel>;
@@ -40,7 +57,8 @@ describe('SignOffPanel', () => {
       ],
     });
     TestBed.inject(AuthState).setSession({
-      accessToken: 'token-one', expiresIn: 900,
+      accessToken: 'token-one',
+      expiresIn: 900,
       user: { id: ME.id, email: 'mira@example.test', name: ME.name, isOperator: false, createdAt: WORKSPACE.createdAt },
       memberships: [{ workspace: WORKSPACE, role }],
     });
@@ -136,7 +154,12 @@ describe('SignOffPanel', () => {
     testId('review-approve')!.click();
     const req = backend.expectOne(`${BASE}/variants/${VARIANT_ID}/review/decision`);
     expect(req.request.body).toEqual({ decision: 'approved', body: 'Hoop mass checked; fine.' });
-    req.flush(thread('approved', [REQUESTED, { ...REQUESTED, id: '70000000-0000-4000-8000-000000000002', kind: 'approved', reviewer: null, body: 'Hoop mass checked; fine.' }]));
+    req.flush(
+      thread('approved', [
+        REQUESTED,
+        { ...REQUESTED, id: '70000000-0000-4000-8000-000000000002', kind: 'approved', reviewer: null, body: 'Hoop mass checked; fine.' },
+      ]),
+    );
     await fixture.whenStable();
     expect(testId('status-chip')!.getAttribute('data-status')).toBe('approved');
     expect(testId('review-approve')).toBeNull();
@@ -161,7 +184,12 @@ describe('SignOffPanel', () => {
     await openAs('reviewer', 'in_review', [REQUESTED]);
     testId('review-approve')!.click();
     backend.expectOne(`${BASE}/variants/${VARIANT_ID}/review/decision`).flush(
-      { error: { code: 'not_in_review', message: 'Only a variant waiting for review can be approved or sent back. Ask for a review first.' } },
+      {
+        error: {
+          code: 'not_in_review',
+          message: 'Only a variant waiting for review can be approved or sent back. Ask for a review first.',
+        },
+      },
       { status: 409, statusText: 'Conflict' },
     );
     TestBed.tick();
@@ -180,7 +208,18 @@ describe('SignOffPanel', () => {
     testId('review-comment-submit')!.click();
     const req = backend.expectOne(`${BASE}/variants/${VARIANT_ID}/review/comments`);
     expect(req.request.body).toEqual({ body: 'Is the bore length from the drawing?' });
-    req.flush(thread('in_review', [REQUESTED, { ...REQUESTED, id: '70000000-0000-4000-8000-000000000003', kind: 'comment', reviewer: null, body: 'Is the bore length from the drawing?' }]));
+    req.flush(
+      thread('in_review', [
+        REQUESTED,
+        {
+          ...REQUESTED,
+          id: '70000000-0000-4000-8000-000000000003',
+          kind: 'comment',
+          reviewer: null,
+          body: 'Is the bore length from the drawing?',
+        },
+      ]),
+    );
     await fixture.whenStable();
     expect(host.querySelectorAll('[data-testid="review-entry"]')).toHaveLength(2);
     expect((testId('review-comment-body') as HTMLTextAreaElement).value).toBe('');

@@ -7,8 +7,25 @@ import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/for
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { AuthState, MembersApi, ReviewsApi, toApiError, WorkspaceContext } from '@tumblewise/api-client';
-import { can, reviewCommentBodySchema, reviewDecisionBodySchema, requestReviewBodySchema, type ReviewEntry, type ReviewThread, type VariantStatus } from '@tumblewise/shared';
-import { applyServerError, ErrorBanner, FieldErrorPipe, focusFirstInvalid, LoadingState, ROLE_LABELS, StatusChip, zodValidator } from '@tumblewise/ui';
+import {
+  can,
+  reviewCommentBodySchema,
+  reviewDecisionBodySchema,
+  requestReviewBodySchema,
+  type ReviewEntry,
+  type ReviewThread,
+  type VariantStatus,
+} from '@tumblewise/shared';
+import {
+  applyServerError,
+  ErrorBanner,
+  FieldErrorPipe,
+  focusFirstInvalid,
+  LoadingState,
+  ROLE_LABELS,
+  StatusChip,
+  zodValidator,
+} from '@tumblewise/ui';
 import type { Observable } from 'rxjs';
 
 /** How each kind of thread entry is written. */
@@ -27,7 +44,22 @@ const ENTRY_WORDS: Record<ReviewEntry['kind'], { icon: string; verb: string }> =
 @Component({
   selector: 'tw-sign-off-panel',
   changeDetection: ChangeDetectionStrategy.OnPush,
-  imports: [ReactiveFormsModule, DatePipe, MatButton, MatFormField, MatLabel, MatHint, MatError, MatInput, MatSelect, MatOption, StatusChip, ErrorBanner, LoadingState, FieldErrorPipe],
+  imports: [
+    ReactiveFormsModule,
+    DatePipe,
+    MatButton,
+    MatFormField,
+    MatLabel,
+    MatHint,
+    MatError,
+    MatInput,
+    MatSelect,
+    MatOption,
+    StatusChip,
+    ErrorBanner,
+    LoadingState,
+    FieldErrorPipe,
+  ],
   templateUrl: './sign-off-panel.html',
   styleUrl: './sign-off-panel.scss',
 })
@@ -98,8 +130,11 @@ export class SignOffPanel {
   protected requestReview(): void {
     if (!this.validate(this.requestForm)) return;
     const { reviewerId, message } = this.requestForm.getRawValue();
-    this.send('request', (ws) => this.reviewsApi.request(ws, this.variantId(), { reviewerId, ...(message.trim() ? { message: message.trim() } : {}) }), this.requestForm, () =>
-      this.requestForm.reset({ reviewerId: '', message: '' }),
+    this.send(
+      'request',
+      (ws) => this.reviewsApi.request(ws, this.variantId(), { reviewerId, ...(message.trim() ? { message: message.trim() } : {}) }),
+      this.requestForm,
+      () => this.requestForm.reset({ reviewerId: '', message: '' }),
     );
   }
 
@@ -107,7 +142,12 @@ export class SignOffPanel {
   protected postComment(): void {
     if (!this.validate(this.commentForm)) return;
     const body = this.commentForm.getRawValue().body.trim();
-    this.send('comment', (ws) => this.reviewsApi.comment(ws, this.variantId(), { body }), this.commentForm, () => this.commentForm.reset({ body: '' }));
+    this.send(
+      'comment',
+      (ws) => this.reviewsApi.comment(ws, this.variantId(), { body }),
+      this.commentForm,
+      () => this.commentForm.reset({ body: '' }),
+    );
   }
 
   /** Approves the variant, or sends it back (a note saying what to change is then required). */
@@ -121,7 +161,12 @@ export class SignOffPanel {
     }
     if (!this.validate(this.decisionForm)) return;
     const body = control.value.trim();
-    this.send(decision, (ws) => this.reviewsApi.decide(ws, this.variantId(), { decision, ...(body ? { body } : {}) }), this.decisionForm, () => this.decisionForm.reset({ body: '' }));
+    this.send(
+      decision,
+      (ws) => this.reviewsApi.decide(ws, this.variantId(), { decision, ...(body ? { body } : {}) }),
+      this.decisionForm,
+      () => this.decisionForm.reset({ body: '' }),
+    );
   }
 
   /** Loads the thread again after a failure. */
@@ -137,7 +182,12 @@ export class SignOffPanel {
     return false;
   }
 
-  private send(kind: NonNullable<ReturnType<typeof this.busy>>, call: (workspaceId: string) => Observable<ReviewThread>, form: Parameters<typeof applyServerError>[0], done: () => void): void {
+  private send(
+    kind: NonNullable<ReturnType<typeof this.busy>>,
+    call: (workspaceId: string) => Observable<ReviewThread>,
+    form: Parameters<typeof applyServerError>[0],
+    done: () => void,
+  ): void {
     const workspaceId = this.workspace.workspaceId();
     if (!workspaceId || this.busy()) return;
     const before = this.status();

@@ -84,7 +84,13 @@ describe('SignUp', () => {
     call.flush({
       accessToken: 'token-one',
       expiresIn: 900,
-      user: { id: '5e4d3c2b-1a09-4f8e-b7d6-c5b4a3928170', email: 'mira.okafor@example.test', name: 'Mira Okafor', isOperator: false, createdAt: '2026-12-01T09:00:00.000Z' },
+      user: {
+        id: '5e4d3c2b-1a09-4f8e-b7d6-c5b4a3928170',
+        email: 'mira.okafor@example.test',
+        name: 'Mira Okafor',
+        isOperator: false,
+        createdAt: '2026-12-01T09:00:00.000Z',
+      },
       memberships: [],
     });
     await fixture.whenStable();
@@ -100,7 +106,10 @@ describe('SignUp', () => {
     await submit();
     backend
       .expectOne('/api/v1/auth/signup')
-      .flush({ error: { code: 'email_taken', message: 'An account with this e-mail already exists.', field: 'email' } }, { status: 409, statusText: 'Conflict' });
+      .flush(
+        { error: { code: 'email_taken', message: 'An account with this e-mail already exists.', field: 'email' } },
+        { status: 409, statusText: 'Conflict' },
+      );
     await fixture.whenStable();
     expect(errorText('signup-email-error')).toBe('An account with this e-mail already exists.');
     expect(host.querySelector('[data-testid="error-banner"]')).toBeNull();
@@ -114,7 +123,10 @@ describe('SignUp', () => {
     await submit();
     backend
       .expectOne('/api/v1/auth/signup')
-      .flush({ error: { code: 'too_many_attempts', message: 'Too many sign-ups from here.' } }, { status: 429, statusText: 'Too Many Requests', headers: { 'Retry-After': '60' } });
+      .flush(
+        { error: { code: 'too_many_attempts', message: 'Too many sign-ups from here.' } },
+        { status: 429, statusText: 'Too Many Requests', headers: { 'Retry-After': '60' } },
+      );
     await fixture.whenStable();
     expect(host.querySelector('[data-testid="error-banner"]')?.textContent).toContain('Too many sign-ups from here. Try again in 60 s.');
   });

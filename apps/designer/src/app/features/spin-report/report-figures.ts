@@ -83,7 +83,13 @@ export function showCheck(check: CategoryCheck): { value: string; limit: string;
   const unit = ({ kg: 'g', m: 'mm', 'kg·m²': 'kg·cm²', 'm³': 'cm³' } as Record<string, string>)[check.unit] ?? check.unit;
   const { min, max } = check.limit;
   const limit =
-    min !== undefined && max !== undefined ? `${convert(min)} to ${convert(max)}` : min !== undefined ? `at least ${convert(min)}` : max !== undefined ? `at most ${convert(max)}` : '—';
+    min !== undefined && max !== undefined
+      ? `${convert(min)} to ${convert(max)}`
+      : min !== undefined
+        ? `at least ${convert(min)}`
+        : max !== undefined
+          ? `at most ${convert(max)}`
+          : '—';
   return { value: check.value === null ? '—' : convert(check.value), limit, unit };
 }
 

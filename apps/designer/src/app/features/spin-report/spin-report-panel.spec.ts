@@ -37,8 +37,21 @@ describe('report figures', () => {
   });
 
   it('shows a check limit in display units (mathjs: 0.7366 m = 736.6 mm)', () => {
-    const shown = showCheck({ id: 'x', title: 'Overall length', rule: 'r', value: 0.538, unit: 'm', limit: { max: 0.7366 }, status: 'pass', indicative: true });
-    expect(shown).toEqual({ value: formatFigure(unit(0.538, 'm').toNumber('mm')), limit: `at most ${formatFigure(unit(0.7366, 'm').toNumber('mm'))}`, unit: 'mm' });
+    const shown = showCheck({
+      id: 'x',
+      title: 'Overall length',
+      rule: 'r',
+      value: 0.538,
+      unit: 'm',
+      limit: { max: 0.7366 },
+      status: 'pass',
+      indicative: true,
+    });
+    expect(shown).toEqual({
+      value: formatFigure(unit(0.538, 'm').toNumber('mm')),
+      limit: `at most ${formatFigure(unit(0.7366, 'm').toNumber('mm'))}`,
+      unit: 'mm',
+    });
   });
 });
 

@@ -16,7 +16,12 @@ import {
 } from './report-figures';
 
 const ROLES = ['major', 'intermediate', 'minor'] as const;
-const CHECK_STATUS: Record<string, string> = { pass: 'Within the limit', fail: 'Outside the limit', info: 'For information', 'not-evaluated': 'Not evaluated' };
+const CHECK_STATUS: Record<string, string> = {
+  pass: 'Within the limit',
+  fail: 'Outside the limit',
+  info: 'For information',
+  'not-evaluated': 'Not evaluated',
+};
 
 /**
  * The spin report of a part in display units: the verdict with its margins and explanation, mass and
@@ -81,16 +86,43 @@ export class SpinReportPanel {
     const unit = this.tradeUnit();
     const pivotMm = t.pivot ? showLength(t.pivot.distance).value : null;
     return [
-      { id: 'balance', name: 'Balance point', about: 'Centre of mass, measured from the butt along the long axis', shown: showLength(t.balancePoint) },
-      { id: 'swingweight', name: 'Swingweight', about: 'About the axis 100 mm from the butt, across the long axis in the face plane', shown: showInertia(t.swingweight, unit) },
-      { id: 'recoil', name: 'Recoil weight', about: 'About the parallel axis through the balance point', shown: showInertia(t.recoilWeight, unit) },
+      {
+        id: 'balance',
+        name: 'Balance point',
+        about: 'Centre of mass, measured from the butt along the long axis',
+        shown: showLength(t.balancePoint),
+      },
+      {
+        id: 'swingweight',
+        name: 'Swingweight',
+        about: 'About the axis 100 mm from the butt, across the long axis in the face plane',
+        shown: showInertia(t.swingweight, unit),
+      },
+      {
+        id: 'recoil',
+        name: 'Recoil weight',
+        about: 'About the parallel axis through the balance point',
+        shown: showInertia(t.recoilWeight, unit),
+      },
       { id: 'twistweight', name: 'Twistweight', about: 'About the long axis', shown: showInertia(t.twistweight, unit) },
-      { id: 'pivot', name: 'Pivot moment', about: pivotMm ? `About the parallel axis through the pivot ${pivotMm} mm from the butt` : 'About a pivot on the long axis', shown: showInertia(t.pivot?.moment ?? null, unit) },
-      { id: 'percussion', name: 'Centre of percussion', about: pivotMm ? `For the pivot ${pivotMm} mm from the butt, measured from the butt` : 'For the pivot, measured from the butt', shown: showLength(t.pivot?.centreOfPercussion ?? null) },
+      {
+        id: 'pivot',
+        name: 'Pivot moment',
+        about: pivotMm ? `About the parallel axis through the pivot ${pivotMm} mm from the butt` : 'About a pivot on the long axis',
+        shown: showInertia(t.pivot?.moment ?? null, unit),
+      },
+      {
+        id: 'percussion',
+        name: 'Centre of percussion',
+        about: pivotMm ? `For the pivot ${pivotMm} mm from the butt, measured from the butt` : 'For the pivot, measured from the butt',
+        shown: showLength(t.pivot?.centreOfPercussion ?? null),
+      },
       { id: 'length', name: 'Overall length', about: 'Along the long axis', shown: showLength(t.length) },
     ];
   });
-  protected readonly hasGrip = computed(() => this.report()?.trade.balancePoint !== null && this.report()?.trade.balancePoint !== undefined);
+  protected readonly hasGrip = computed(
+    () => this.report()?.trade.balancePoint !== null && this.report()?.trade.balancePoint !== undefined,
+  );
   protected readonly checks = computed(() => (this.report()?.checks ?? []).map((c) => ({ check: c, shown: showCheck(c) })));
 
   /** A relative margin as a percentage. */

@@ -1,7 +1,20 @@
 import { toDisplay } from '@tumblewise/engine';
 import { formatFigure } from '../spin-report/report-figures';
 
-const LENGTH_KEYS = new Set(['radius', 'length', 'innerRadius', 'topRadius', 'wall', 'size', 'semiAxes', 'majorRadius', 'minorRadius', 'position', 'point', 'pivotDistance']);
+const LENGTH_KEYS = new Set([
+  'radius',
+  'length',
+  'innerRadius',
+  'topRadius',
+  'wall',
+  'size',
+  'semiAxes',
+  'majorRadius',
+  'minorRadius',
+  'position',
+  'point',
+  'pivotDistance',
+]);
 
 /** The last named key of a path (`grip.point[1]` → `point`). */
 function keyOf(path: string): string {
@@ -12,7 +25,8 @@ function keyOf(path: string): string {
 /** A document value from a diff written in display units (mm, g, kg/m³, rev/s, °); absent shows "—". */
 export function showFieldValue(path: string, value: unknown): string {
   if (value === undefined || value === null) return '—';
-  if (typeof value !== 'number') return typeof value === 'string' && value.startsWith('[') ? `${JSON.parse(value).length} entries` : String(value);
+  if (typeof value !== 'number')
+    return typeof value === 'string' && value.startsWith('[') ? `${JSON.parse(value).length} entries` : String(value);
   const key = keyOf(path);
   if (path.startsWith('spin.rate')) return `${formatFigure(toDisplay(value, 'rate', 'rev/s'))} rev/s`;
   if (path.startsWith('spin.axis') || key === 'axis' || key === 'faceNormal') return formatFigure(value);

@@ -12,7 +12,12 @@ const V1 = {
 
 describe('diffDocuments', () => {
   it('finds nothing between a document and itself, and treats absent defaults as equal', () => {
-    const withDefaults = { ...V1, dissipative: false, spin: { ...V1.spin, misalignmentDeg: 1 }, primitives: V1.primitives.map((p) => ({ rotationDeg: [0, 0, 0], mode: 'add', ...p })) };
+    const withDefaults = {
+      ...V1,
+      dissipative: false,
+      spin: { ...V1.spin, misalignmentDeg: 1 },
+      primitives: V1.primitives.map((p) => ({ rotationDeg: [0, 0, 0], mode: 'add', ...p })),
+    };
     expect(diffDocuments(V1, withDefaults)).toEqual({ primitives: [], settings: [], same: true });
   });
 
@@ -42,7 +47,12 @@ describe('diffDocuments', () => {
   });
 
   it('lists the part-wide changes by path', () => {
-    const v2 = { ...V1, spin: { axis: [0, 0, 1], rate: 31.4 }, dissipative: true, grip: { point: [0, 0, 0], axis: [0, 0, 1], faceNormal: [0, 1, 0] } };
+    const v2 = {
+      ...V1,
+      spin: { axis: [0, 0, 1], rate: 31.4 },
+      dissipative: true,
+      grip: { point: [0, 0, 0], axis: [0, 0, 1], faceNormal: [0, 1, 0] },
+    };
     const paths = diffDocuments(V1, v2).settings.map((f) => f.path);
     expect(paths).toEqual(expect.arrayContaining(['spin.axis[0]', 'spin.axis[2]', 'dissipative', 'grip.point[0]', 'grip.faceNormal[1]']));
     expect(paths).not.toContain('spin.rate');

@@ -73,7 +73,11 @@ describe('CardForm', () => {
   const text = (id: string) => host.querySelector(`[data-testid="${id}"]`)?.textContent?.trim() ?? '';
 
   async function fillAndSubmit(number: string, expiry: string, cvc: string): Promise<void> {
-    for (const [id, value] of [['card-number', number], ['card-expiry', expiry], ['card-cvc', cvc]] as const) {
+    for (const [id, value] of [
+      ['card-number', number],
+      ['card-expiry', expiry],
+      ['card-cvc', cvc],
+    ] as const) {
       field(id).value = value;
       field(id).dispatchEvent(new Event('input'));
     }
@@ -118,6 +122,8 @@ describe('CardForm', () => {
   it('shows the server’s refusal of a declined card above the fields', async () => {
     fixture.componentInstance.serverError.set('Your card was declined. Nothing was charged and nothing changed.');
     await fixture.whenStable();
-    expect(host.querySelector('[data-testid="error-banner"] p')?.textContent).toBe('Your card was declined. Nothing was charged and nothing changed.');
+    expect(host.querySelector('[data-testid="error-banner"] p')?.textContent).toBe(
+      'Your card was declined. Nothing was charged and nothing changed.',
+    );
   });
 });

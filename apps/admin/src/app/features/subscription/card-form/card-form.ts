@@ -16,7 +16,14 @@ import { CARD_TOKENIZER } from './card-tokenizer';
   changeDetection: ChangeDetectionStrategy.OnPush,
   imports: [ReactiveFormsModule, MatFormField, MatLabel, MatError, MatHint, MatInput, MatButton, ErrorBanner, FieldErrorPipe],
   template: `
-    <form class="tw-card-form" [formGroup]="form" (ngSubmit)="submitCard()" novalidate [attr.aria-label]="formLabel()" data-testid="card-form">
+    <form
+      class="tw-card-form"
+      [formGroup]="form"
+      (ngSubmit)="submitCard()"
+      novalidate
+      [attr.aria-label]="formLabel()"
+      data-testid="card-form"
+    >
       <tw-error-banner [message]="serverError()" />
       <mat-form-field appearance="outline" class="tw-card-number">
         <mat-label>Card number</mat-label>
