@@ -23,6 +23,7 @@ import { rotationFromDegrees } from '../src/engine/linear/rotation-from-degrees'
 // The upload check's self-intersection search is server code (it uses three.js); measured here beside the other STL figures.
 import { firstSelfIntersection } from '../../server/src/meshes/self-intersection';
 import { partGenerator } from './bench-part';
+import { designBench } from './design-bench';
 import { BenchTable } from './bench-table';
 
 /** Median time (µs) of `fn` over `runs` runs after `warm` warm-up runs. */
@@ -227,6 +228,9 @@ export async function runEngineBench(): Promise<string> {
   const study = runScatterStudy({ part: part50, samples: 10_000, seed: 1 });
   const scatterMs = Number(process.hrtime.bigint() - t0) / 1e6;
   record('scatter study 10,000 samples × 50 primitives', scatterMs, 'ms', `one run; ${study.sensitivities.length} sensitivities`);
+
+  // 6. Goal seek and design sweep.
+  designBench(table);
 
   return table.write('engine', { sink });
 }

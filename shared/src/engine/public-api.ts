@@ -59,3 +59,8 @@ export { SeededRandom } from './scatter/seeded-random';
 export { DEFAULT_TOLERANCE } from './scatter/part-model';
 export { classifySpin, type SpinClass } from './spin/classify-spin';
 export { rotationFromDegrees } from './linear/rotation-from-degrees';
+export { goalSeek, TARGET_TOLERANCE, type GoalSeekRequest, type GoalSeekResult } from './design/goal-seek';
+export { sweepDesign, gridValues, type DesignSweepRequest, type SweepResult, type SweepProgress } from './design/sweep';
+export { designFigures, steadyMargin, type DesignOptions } from './design/design-figures';
+export { readDesignParameter, writeDesignParameter, designParametersOf } from './design/design-parameters';
+export { solveDesignRequest, sweepDesignRequest } from './design/design-requests';

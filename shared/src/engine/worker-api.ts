@@ -14,3 +14,7 @@ export { parseStl } from './mesh/parse-stl';
 export { meshMassProperties } from './mesh/mesh-mass-properties';
 export { runScatterStudy } from './scatter/scatter-study';
 export { rotationFromDegrees } from './linear/rotation-from-degrees';
+export { goalSeek, type GoalSeekRequest, type GoalSeekResult } from './design/goal-seek';
+export { sweepDesign, type DesignSweepRequest, type SweepResult, type SweepProgress } from './design/sweep';
+export type { DesignOptions } from './design/design-figures';
+export { solveDesignRequest, sweepDesignRequest } from './design/design-requests';

@@ -12,5 +12,6 @@ export * from './reviews';
 export * from './meshes';
 export * from './measurements';
 export * from './scatter-studies';
+export * from './design-targets';
 export * from './billing';
 export * from './part-document';
