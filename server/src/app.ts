@@ -6,6 +6,7 @@ import type { AppContext } from './app-context';
 import { authRoutes } from './accounts/auth-routes';
 import { meRoutes } from './accounts/me-routes';
 import { analysisRoutes } from './analysis/analysis-routes';
+import { designRoutes } from './design/design-routes';
 import { auditRoutes } from './audit/audit-routes';
 import { billingRoutes } from './billing/billing-routes';
 import { billingWebhookRoutes } from './billing/billing-webhook';
@@ -63,7 +64,7 @@ export function createApp(ctx: AppContext): express.Express {
   api.use(billingWebhookRoutes(ctx));
   // `/analyze` bodies stay text: a worker thread parses them (analysis-routes.ts).
   api.use('/analyze', express.text({ type: 'application/json', limit: ctx.config.limits.partBody }));
-  api.use('/simulate', express.json({ limit: ctx.config.limits.partBody }));
+  api.use(['/simulate', '/solve', '/sweep'], express.json({ limit: ctx.config.limits.partBody }));
   api.use(express.json({ limit: ctx.config.limits.jsonBody }));
   api.use(cookieParser());
   api.use(authenticate(ctx.tokens, ctx.signedIn));
@@ -71,6 +72,7 @@ export function createApp(ctx: AppContext): express.Express {
   // Right after health: the live report calls it at nearly every keystroke, and every router
   // passed on the way costs each request its path matching.
   api.use(analysisRoutes(ctx));
+  api.use(designRoutes(ctx));
   api.use(docsRoutes(ctx));
   api.use('/auth', authRoutes(ctx));
   api.use('/invitations', invitationAcceptRoutes(ctx));

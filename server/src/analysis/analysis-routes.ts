@@ -1,29 +1,13 @@
 import express, { Router } from 'express';
 import { z } from 'zod';
-import { idSchema, partDocumentSchema } from '@tumblewise/shared';
+import { partDocumentSchema } from '@tumblewise/shared';
 import { simulateInputSchema, type SimulationResult } from '@tumblewise/engine';
 import type { AppContext } from '../app-context';
 import { routeGroup } from '../http/api-route';
 import { AppError } from '../http/app-error';
-import { referencesByIds, taskReferences } from '../compute/task-references';
-import type { ReferenceIds, TaskReferences } from '../compute/compute-tasks';
-import { Membership } from '../models/init-models';
-
-const workspaceQuery = z.object({
-  workspace: idSchema.optional().describe('resolve materialId and meshId against this workspace (you must be a member)'),
-});
-
-/** The caller must belong to a workspace named in `?workspace=` (404 otherwise, as for any workspace route). */
-async function assertMember(userId: string, workspaceId: string): Promise<void> {
-  if (!(await Membership.findOne({ where: { workspaceId, userId } }))) throw AppError.notFound('Workspace');
-}
-
-/** References of a document in a workspace the caller belongs to (404 otherwise). */
-async function referencesFor(userId: string, workspaceId: string | undefined, doc: unknown): Promise<TaskReferences | undefined> {
-  if (!workspaceId) return undefined;
-  await assertMember(userId, workspaceId);
-  return taskReferences(workspaceId, doc);
-}
+import { referencesByIds } from '../compute/task-references';
+import type { ReferenceIds } from '../compute/compute-tasks';
+import { abortOnClose, assertMember, referencesFor, workspaceQuery } from './compute-request';
 
 /** The request body as text: `app.ts` reads `/analyze` bodies unparsed, for the worker thread to parse. */
 function bodyText(req: express.Request): string {
@@ -83,17 +67,4 @@ export function analysisRoutes(ctx: AppContext): Router {
   });
 
   return router;
-}
-
-/**
- * Cancels the worker task when the client goes away before the answer is sent. Listens on the
- * response, not the socket: a keep-alive socket carries many requests, and a listener per request
- * on it would pile up until the connection closes.
- */
-function abortOnClose(res: express.Response): AbortSignal {
-  const controller = new AbortController();
-  res.once('close', () => {
-    if (!res.writableFinished) controller.abort();
-  });
-  return controller.signal;
 }

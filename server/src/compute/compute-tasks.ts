@@ -7,6 +7,8 @@ import {
   parseStl,
   runScatterStudy,
   simulate,
+  solveDesignRequest,
+  sweepDesignRequest,
   validatePartDocument,
   type InputIssue,
   type MeshProblem,
@@ -44,7 +46,11 @@ export type ComputeTask =
   | { kind: 'check-mesh'; bytes: Uint8Array; maxTriangles: number }
   /** The side view of a part for its PDF (PartDrawing); uploaded meshes drawn from `references`. */
   | { kind: 'part-drawing'; document: unknown; references?: TaskReferences }
-  | { kind: 'scatter'; input: unknown; references?: TaskReferences; progress?: MessagePort };
+  | { kind: 'scatter'; input: unknown; references?: TaskReferences; progress?: MessagePort }
+  /** Goal seek: the body of `POST /solve` (`{ part, free, targets }`), checked on the worker. */
+  | { kind: 'solve'; input: unknown; references?: TaskReferences }
+  /** Design sweep: the body of `POST /sweep` (`{ part, axes, figures }`), checked on the worker. */
+  | { kind: 'sweep'; input: unknown; references?: TaskReferences };
 
 /** What a mesh upload learns about the file. */
 export interface MeshCheckResult {
@@ -134,6 +140,10 @@ export function runComputeTask(task: ComputeTask): ComputeOutcome | Promise<Comp
         return analyzeJson(task);
       case 'simulate':
         return { ok: true, value: simulate(task.input, resolvers(task.references)) };
+      case 'solve':
+        return { ok: true, value: solveDesignRequest(task.input, resolvers(task.references)) };
+      case 'sweep':
+        return { ok: true, value: sweepDesignRequest(task.input, resolvers(task.references)) };
       case 'check-mesh':
         return checkMesh(task.bytes, task.maxTriangles).then((value) => ({ ok: true, value }));
       case 'part-drawing': {
