@@ -18,6 +18,7 @@ export * from './materials/materials-api';
 export * from './parts/parts-api';
 export * from './variants/variants-api';
 export * from './analysis/analysis-api';
+export * from './design/design-api';
 export * from './simulation/simulation-api';
 export * from './reviews/reviews-api';
 export * from './scatter/scatter-api';
