@@ -37,7 +37,7 @@ export function designBench(table: BenchTable): void {
   ];
   // Targets made from known values (recovery by construction), so the seek can meet them.
   let made = big;
-  [0.052, 6100, 0.35, 0.031].forEach((v, i) => (made = writeDesignParameter(made, free[i].primitive, free[i].parameter, v)));
+  [0.052, 6100, 0.35, 0.031].forEach((v, i) => (made = writeDesignParameter(made, free[i].primitive!, free[i].parameter!, v)));
   const truth = designFigures(made, ['mass', 'balancePoint', 'swingweight', 'I1']);
   const reachable: GoalSeekRequest = {
     free,

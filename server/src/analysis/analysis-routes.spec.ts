@@ -45,6 +45,23 @@ describe('POST /analyze', () => {
     expect((await request(t.app).post('/api/v1/analyze').set(bearer(token)).send({}).expect(400)).body.error.code).toBe('invalid_input');
   });
 
+  it('refuses a flight time that is not a positive number of seconds up to 600, naming `flightTime`', async () => {
+    for (const flightTime of [0, -1, 601, 'soon']) {
+      const res = await request(t.app)
+        .post('/api/v1/analyze')
+        .set(bearer(token))
+        .send({ ...racket, flightTime })
+        .expect(400);
+      expect(res.body.error).toMatchObject({ code: 'invalid_input', field: 'flightTime' });
+    }
+    const ok = await request(t.app)
+      .post('/api/v1/analyze')
+      .set(bearer(token))
+      .send({ ...racket, flightTime: 0.1 })
+      .expect(200);
+    expect(ok.body.spin).toMatchObject({ flightTime: 0.1, flightTimeSource: 'part', verdict: 'watch' });
+  });
+
   it('refuses a body that is not JSON, or not sent as JSON, saying so', async () => {
     const broken = await request(t.app)
       .post('/api/v1/analyze')

@@ -146,4 +146,15 @@ describe('part outlines for the PDF drawing', () => {
     });
     expect(partDrawing({ primitives: [] })).toMatchObject({ up: [0, 0, 1], right: [0, 1, 0] });
   });
+
+  it('draws fields that refer to named parameters at their resolved values', () => {
+    const box = (size: unknown[]) => ({ id: 'bar', shape: 'box', size, density: 1000 });
+    const spin = { axis: [0, 0, 1], rate: 10 };
+    const byParameter = partDrawing({ parameters: { len: 0.4 }, primitives: [box([0.02, 0.02, { param: 'len', offset: 0.1 }])], spin });
+    const plain = partDrawing({ primitives: [box([0.02, 0.02, 0.5])], spin });
+    expect(byParameter.outlines).toEqual(plain.outlines);
+    // Seen along x with z up, the bar is 0.5 m tall.
+    const ys = plain.outlines[0].points.map((q) => q[1]);
+    expect(Math.max(...ys) - Math.min(...ys)).toBeCloseTo(0.5, 12);
+  });
 });

@@ -1,5 +1,5 @@
 import { polygonArea, polygonHull } from 'd3-polygon';
-import { rotationFromDegrees } from '@tumblewise/engine/worker';
+import { rotationFromDegrees, validatePartDocument } from '@tumblewise/engine/worker';
 
 /** A primitive's silhouette projected on a drawing plane (convex hull of surface samples), in m. */
 export interface Outline {
@@ -199,6 +199,16 @@ export function partOutlines(doc: unknown, right: Vec, up: Vec, meshCorners: Mes
   });
 }
 
+/**
+ * A document whose fields refer to named parameters, as the engine validates it (every field a
+ * number); any other document, or one that does not validate, as it is.
+ */
+function withReferencesResolved(doc: unknown): unknown {
+  if (!doc || typeof doc !== 'object' || !('parameters' in doc)) return doc;
+  const checked = validatePartDocument(doc);
+  return checked.ok ? checked.value : doc;
+}
+
 /** The side view the PDF draws: its axes in the part frame and each primitive's outline. */
 export interface PartDrawing {
   right: Vec;
@@ -212,7 +222,8 @@ export interface PartDrawing {
  * The part seen from the side: its long axis up when a grip frame is given (the view looks along
  * the grip's face normal), else part z up; right = up × face.
  */
-export function partDrawing(doc: unknown, meshCorners: MeshCorners = () => undefined): PartDrawing {
+export function partDrawing(stored: unknown, meshCorners: MeshCorners = () => undefined): PartDrawing {
+  const doc = withReferencesResolved(stored);
   const grip = (doc as { grip?: { axis?: unknown; faceNormal?: unknown } } | null)?.grip;
   const up: Vec = Array.isArray(grip?.axis) && grip.axis.length === 3 ? vec(grip.axis) : [0, 0, 1];
   const face: Vec =

@@ -73,4 +73,42 @@ describe('the spin report PDF', () => {
     }
     expect(keys.filter((k) => k.text === check.title)).toHaveLength(60);
   });
+
+  it('lists the axis the motion circles, its period and the flight time, and leaves them out of a report stored before them', async () => {
+    const rowsOf = async (report: unknown) => {
+      const written = new Map<string, string>();
+      let lastKey: string | null = null;
+      const original = PDFDocument.prototype.text;
+      const spy = jest.spyOn(PDFDocument.prototype, 'text').mockImplementation(function (this: PDFKit.PDFDocument, ...args: unknown[]) {
+        if (typeof args[0] === 'string' && args[1] === 48) lastKey = args[0];
+        else if (typeof args[0] === 'string' && args[1] === 290 && lastKey !== null) written.set(lastKey, args[0]);
+        return original.apply(this, args as never);
+      });
+      await spinReportPdf({
+        partName: 'Shaft',
+        projectName: 'Checks',
+        workspaceName: 'Kestrel Bay',
+        number: 1,
+        label: '',
+        status: 'draft',
+        author: null,
+        createdAt: new Date('2026-12-02T00:00:00Z'),
+        engineVersion: 'test',
+        drawing: partDrawing(doc),
+        report: report as ReturnType<typeof analyzePart>,
+      });
+      spy.mockRestore();
+      return written;
+    };
+    const report = analyzePart({ ...doc, category: 'javelin' });
+    const rows = await rowsOf(report);
+    expect(rows.get('Axis the motion circles')).toMatch(/^minor \(cone half-angle [\d.]+°\)$/);
+    expect(rows.get('Period of the body-frame motion')).toMatch(/ s$/);
+    expect(rows.get('Time in the air')).toBe('3.5 s (category default, a common practice estimate)');
+    const { motionAxis: _a, coneHalfAngleDeg: _c, wobblePeriod: _w, flightTime: _f, flightTimeSource: _s, ...oldSpin } = report.spin;
+    const old = await rowsOf({ ...report, spin: oldSpin });
+    expect(old.has('Axis the motion circles')).toBe(false);
+    expect(old.has('Time in the air')).toBe(false);
+    expect(old.get('Wobble frequency')).toMatch(/rad\/s$/);
+  });
 });

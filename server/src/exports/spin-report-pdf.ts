@@ -112,6 +112,7 @@ export function spinReportPdf(v: PdfVariant): Promise<Buffer> {
     ['Growth rate λ', r.spin.growthRate === null ? '—' : `${fmt(r.spin.growthRate)} 1/s (e-folding ${fmt(r.spin.eFoldingTime)} s)`],
     ['Predicted time to first flip', r.spin.flipTime === null ? '—' : `${fmt(r.spin.flipTime)} s`],
     ['Wobble frequency', r.spin.wobbleFrequency === null ? '—' : `${fmt(r.spin.wobbleFrequency)} rad/s`],
+    ...motionRows(r.spin),
   ]);
   table('Trade figures', [
     ['Balance point from the butt', mm(r.trade.balancePoint)],
@@ -137,6 +138,22 @@ export function spinReportPdf(v: PdfVariant): Promise<Buffer> {
 }
 
 /** A side view of the part (long axis up when a grip frame is given), removals dashed. */
+/** The axis the motion circles, its period and the flight time; reports stored before these were computed leave them out. */
+function motionRows(spin: Partial<SpinReport['spin']>): [string, string][] {
+  const rows: [string, string][] = [];
+  if (spin.motionAxis !== undefined) {
+    const cone = spin.coneHalfAngleDeg ?? null;
+    rows.push(['Axis the motion circles', cone === null ? spin.motionAxis : `${spin.motionAxis} (cone half-angle ${fmt(cone, 3)}°)`]);
+  }
+  if (spin.wobblePeriod !== undefined)
+    rows.push(['Period of the body-frame motion', spin.wobblePeriod === null ? '—' : `${fmt(spin.wobblePeriod)} s`]);
+  if (spin.flightTime !== undefined) {
+    const basis = spin.flightTimeSource === 'part' ? 'set for this part' : 'category default, a common practice estimate';
+    rows.push(['Time in the air', spin.flightTime === null ? '—' : `${fmt(spin.flightTime)} s (${basis})`]);
+  }
+  return rows;
+}
+
 function drawPart(doc: PDFKit.PDFDocument, { right, up, outlines, meshesLeftOut }: PartDrawing, r: SpinReport): void {
   const all = outlines.flatMap((o) => o.points);
   if (all.length === 0) {

@@ -30,6 +30,23 @@ describe('buildComparison', () => {
     expect(mass.deltas).toEqual([0, null]);
   });
 
+  it('shows a stored report without the motion axis, cone, period or flight time as missing figures, beside one with them', () => {
+    const newer = {
+      id: 'n',
+      label: 'v3',
+      report: {
+        ...report(0.3, 'watch', [3, 2, 1]),
+        spin: { verdict: 'watch', motionAxis: 'major', coneHalfAngleDeg: 58.7, wobblePeriod: 17.1, flightTime: 1 },
+      },
+    };
+    const c = buildComparison([a, newer]);
+    const row = (key: string) => c.rows.find((r) => r.key === key)!.values;
+    expect(row('motionAxis')).toEqual([null, 'major']);
+    expect(row('cone')).toEqual([null, 58.7]);
+    expect(row('wobblePeriod')).toEqual([null, 17.1]);
+    expect(row('flightTime')).toEqual([null, 1]);
+  });
+
   it('refuses fewer than two or more than six variants, and a foreign baseline', () => {
     expect(() => buildComparison([a])).toThrow(RangeError);
     expect(() => buildComparison([a, b, a, b, a, b, a])).toThrow(RangeError);
@@ -48,6 +65,6 @@ describe('comparisonCsv', () => {
     const lines = csv.trimEnd().split('\r\n');
     expect(lines[0]).toBe('figure,unit,"v1, ""light""","v1, ""light"" (baseline) delta","\'=HYPERLINK(""x"")","\'=HYPERLINK(""x"") delta"');
     expect(lines.find((l) => l.startsWith('Mass,'))).toMatch(/^Mass,kg,0\.3,0,0\.33,0\.03/);
-    expect(lines).toHaveLength(1 + 16);
+    expect(lines).toHaveLength(1 + 20);
   });
 });

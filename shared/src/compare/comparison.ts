@@ -36,6 +36,8 @@ type Getter = (r: StoredReport) => unknown;
 const ROWS: { key: string; label: string; unit: string; get: Getter }[] = [
   { key: 'verdict', label: 'Verdict', unit: 'text', get: (r) => r.spin?.verdict },
   { key: 'nearestAxis', label: 'Nearest principal axis', unit: 'text', get: (r) => r.spin?.nearestAxis },
+  // Reports stored before the motion axis and the flight time were computed lack these: they show as missing.
+  { key: 'motionAxis', label: 'Axis the motion circles', unit: 'text', get: (r) => r.spin?.motionAxis },
   { key: 'mass', label: 'Mass', unit: 'kg', get: (r) => r.mass },
   { key: 'I1', label: 'Principal moment I1 (major)', unit: 'kg·m²', get: (r) => r.principal?.moments?.[0] },
   { key: 'I2', label: 'Principal moment I2 (intermediate)', unit: 'kg·m²', get: (r) => r.principal?.moments?.[1] },
@@ -46,6 +48,9 @@ const ROWS: { key: string; label: string; unit: string; get: Getter }[] = [
   { key: 'growthRate', label: 'Growth rate λ', unit: '1/s', get: (r) => r.spin?.growthRate },
   { key: 'flipTime', label: 'Time to first flip', unit: 's', get: (r) => r.spin?.flipTime },
   { key: 'wobble', label: 'Wobble frequency', unit: 'rad/s', get: (r) => r.spin?.wobbleFrequency },
+  { key: 'cone', label: 'Cone half-angle of the motion', unit: '°', get: (r) => r.spin?.coneHalfAngleDeg },
+  { key: 'wobblePeriod', label: 'Period of the body-frame motion', unit: 's', get: (r) => r.spin?.wobblePeriod },
+  { key: 'flightTime', label: 'Time in the air', unit: 's', get: (r) => r.spin?.flightTime },
   { key: 'balancePoint', label: 'Balance point from butt', unit: 'm', get: (r) => r.trade?.balancePoint },
   { key: 'swingweight', label: 'Swingweight (10 cm axis)', unit: 'kg·m²', get: (r) => r.trade?.swingweight },
   { key: 'recoilWeight', label: 'Recoil weight', unit: 'kg·m²', get: (r) => r.trade?.recoilWeight },

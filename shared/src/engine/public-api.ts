@@ -16,7 +16,8 @@ export {
 export type { Body } from './composition/body';
 export { principalAxes, EQUAL_MOMENTS_ANALYTIC, EQUAL_MOMENTS_MESH, type PrincipalAxes } from './principal/principal-axes';
 export { jacobiEigen } from './principal/jacobi';
-export { assessSpin, type SpinAssessment, type AxisRole } from './spin/assess-spin';
+export { assessSpin, type SpinAssessment, type AxisRole, type MotionAxis, type FlightTimeSource } from './spin/assess-spin';
+export { FLIGHT_TIME_DEFAULTS, FLIGHT_TIME_BASIS, type FlightTimeDefault } from './spin/flight-time-defaults';
 export { DEFAULT_VERDICT_THRESHOLDS, type Verdict, type VerdictThresholds } from './spin/verdict-thresholds';
 export { intermediateGrowthRate } from './spin/growth-rate';
 export { wobbleFrequency } from './spin/wobble-frequency';
@@ -62,5 +63,12 @@ export { rotationFromDegrees } from './linear/rotation-from-degrees';
 export { goalSeek, TARGET_TOLERANCE, type GoalSeekRequest, type GoalSeekResult } from './design/goal-seek';
 export { sweepDesign, gridValues, type DesignSweepRequest, type SweepResult, type SweepProgress } from './design/sweep';
 export { designFigures, steadyMargin, type DesignOptions } from './design/design-figures';
-export { readDesignParameter, writeDesignParameter, designParametersOf } from './design/design-parameters';
+export {
+  readDesignParameter,
+  writeDesignParameter,
+  designParametersOf,
+  writeNamedParameter,
+  usesOfParameter,
+  type ParameterUse,
+} from './design/design-parameters';
 export { solveDesignRequest, sweepDesignRequest } from './design/design-requests';

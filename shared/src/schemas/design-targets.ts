@@ -1,34 +1,22 @@
 import { z } from 'zod';
-import { partDocumentSchema } from './part-document';
+import { parameterNameSchema, partDocumentSchema, REFERABLE_FIELDS } from './part-document';
 
 /**
  * Design to target: the request bodies of a goal seek (free parameters within bounds, target
  * figures) and of a design sweep (one or two parameters stepped over a grid), and their answers.
- * SI units throughout (kg, m, kg/m³, kg·m²); a parameter is a primitive's numeric field named as in
- * the part document, with `.0`, `.1`, `.2` for the components of a triple.
+ * SI units throughout (kg, m, kg/m³, kg·m²).
+ *
+ * A free parameter (or sweep axis) is either one primitive's numeric field,
+ * `{ "primitive": "grip", "parameter": "radius", … }`, named as in the part document with `.0`,
+ * `.1`, `.2` for the components of a triple; or one of the part's named parameters,
+ * `{ "param": "hoopRadius", … }`, which moves every field that refers to it (each as
+ * scale × value + offset). A field that refers to a named parameter is varied through that
+ * parameter, never on its own. In answers (`changes`, a sweep's `axes`) a named parameter appears as
+ * `{ "parameter": "hoopRadius", … }` without `primitive`.
  */
 
-/** The primitive fields a design study may vary. */
-export const DESIGN_PARAMETERS = [
-  'mass',
-  'density',
-  'radius',
-  'innerRadius',
-  'length',
-  'topRadius',
-  'majorRadius',
-  'minorRadius',
-  'wall',
-  'position.0',
-  'position.1',
-  'position.2',
-  'size.0',
-  'size.1',
-  'size.2',
-  'semiAxes.0',
-  'semiAxes.1',
-  'semiAxes.2',
-] as const;
+/** The primitive fields a design study may vary (the fields that may refer to a named parameter). */
+export const DESIGN_PARAMETERS = REFERABLE_FIELDS;
 export type DesignParameter = (typeof DESIGN_PARAMETERS)[number];
 
 /**
@@ -83,10 +71,42 @@ const primitiveId = z
 const parameter = z.enum(DESIGN_PARAMETERS, { error: `must be one of ${DESIGN_PARAMETERS.join(', ')}` });
 const figure = z.enum(DESIGN_FIGURES, { error: `must be one of ${DESIGN_FIGURES.join(', ')}` });
 
-/** One free parameter and its bounds (inclusive, SI). */
-export const designFreeSchema = z.strictObject({ primitive: primitiveId, parameter, min: num(), max: num() }).superRefine((f, ctx) => {
-  if (!(f.min < f.max)) ctx.addIssue({ code: 'custom', path: ['max'], message: 'must be greater than min' });
-});
+/** Either `primitive` and `parameter` (a primitive's field) or `param` (a named parameter), never both. */
+function checkVaried(f: { primitive?: string; parameter?: string; param?: string }, ctx: z.core.$RefinementCtx): void {
+  if (f.param !== undefined) {
+    for (const key of ['primitive', 'parameter'] as const)
+      if (f[key] !== undefined)
+        ctx.addIssue({
+          code: 'custom',
+          path: [key],
+          message: 'does not go with param: give a named parameter (param) or a primitive and its parameter, not both',
+        });
+    return;
+  }
+  if (f.primitive === undefined)
+    ctx.addIssue({ code: 'custom', path: ['primitive'], message: 'is required (or give param to vary a named parameter)' });
+  if (f.parameter === undefined)
+    ctx.addIssue({ code: 'custom', path: ['parameter'], message: 'is required (or give param to vary a named parameter)' });
+}
+
+/** What a free parameter or sweep axis varies, as one key (equal keys vary the same thing). */
+export function variedKey(f: { primitive?: string; parameter?: string; param?: string }): string {
+  return f.param !== undefined ? `p:${f.param}` : `f:${f.primitive}\u0000${f.parameter}`;
+}
+
+/** One free parameter and its bounds (inclusive, SI): a primitive's field, or a named parameter (`param`). */
+export const designFreeSchema = z
+  .strictObject({
+    primitive: primitiveId.optional(),
+    parameter: parameter.optional(),
+    param: parameterNameSchema.optional(),
+    min: num(),
+    max: num(),
+  })
+  .superRefine((f, ctx) => {
+    checkVaried(f, ctx);
+    if (!(f.min < f.max)) ctx.addIssue({ code: 'custom', path: ['max'], message: 'must be greater than min' });
+  });
 export type DesignFree = z.infer<typeof designFreeSchema>;
 
 /** One target: an exact `value`, or a `min` and/or `max` the figure must keep to (SI). */
@@ -110,10 +130,14 @@ const freeList = z
   .superRefine((list, ctx) => {
     const seen = new Map<string, number>();
     list.forEach((f, i) => {
-      const key = `${f.primitive}\u0000${f.parameter}`;
+      const key = variedKey(f);
       const first = seen.get(key);
       if (first !== undefined)
-        ctx.addIssue({ code: 'custom', path: [i], message: `repeats free[${first}] (the same parameter of the same primitive)` });
+        ctx.addIssue({
+          code: 'custom',
+          path: [i],
+          message: `repeats free[${first}] (${f.param !== undefined ? 'the same named parameter' : 'the same parameter of the same primitive'})`,
+        });
       else seen.set(key, i);
     });
   });
@@ -131,11 +155,12 @@ export type GoalSeekSettings = z.input<typeof goalSeekSettingsSchema>;
 export const solveRequestSchema = z.strictObject({ part: partDocumentSchema, free: freeList, targets: targetList });
 export type SolveRequest = z.input<typeof solveRequestSchema>;
 
-/** One axis of a sweep: `steps` evenly spaced values from `from` to `to`, both included. */
+/** One axis of a sweep: `steps` evenly spaced values from `from` to `to`, both included; a primitive's field or a named parameter (`param`). */
 export const sweepAxisSchema = z
   .strictObject({
-    primitive: primitiveId,
-    parameter,
+    primitive: primitiveId.optional(),
+    parameter: parameter.optional(),
+    param: parameterNameSchema.optional(),
     from: num(),
     to: num(),
     steps: z
@@ -144,6 +169,7 @@ export const sweepAxisSchema = z
       .max(MAX_SWEEP_POINTS, { error: `must be at most ${MAX_SWEEP_POINTS}` }),
   })
   .superRefine((a, ctx) => {
+    checkVaried(a, ctx);
     if (a.from === a.to) ctx.addIssue({ code: 'custom', path: ['to'], message: 'must differ from from' });
   });
 export type SweepAxis = z.infer<typeof sweepAxisSchema>;
@@ -153,8 +179,12 @@ const axisList = z
   .min(1, { error: 'must hold one or two axes' })
   .max(2, { error: 'must hold one or two axes' })
   .superRefine((axes, ctx) => {
-    if (axes.length === 2 && axes[0].primitive === axes[1].primitive && axes[0].parameter === axes[1].parameter) {
-      ctx.addIssue({ code: 'custom', path: [1], message: 'repeats axes[0] (the same parameter of the same primitive)' });
+    if (axes.length === 2 && variedKey(axes[0]) === variedKey(axes[1])) {
+      ctx.addIssue({
+        code: 'custom',
+        path: [1],
+        message: `repeats axes[0] (${axes[1].param !== undefined ? 'the same named parameter' : 'the same parameter of the same primitive'})`,
+      });
     }
     const total = axes.reduce((n, a) => n * a.steps, 1);
     if (total > MAX_SWEEP_POINTS)
@@ -197,8 +227,11 @@ export const achievedTargetSchema = z.object({
 });
 export type AchievedTarget = z.infer<typeof achievedTargetSchema>;
 
-/** One parameter the answer changes. */
-export const designChangeSchema = z.object({ primitive: z.string(), parameter, from: z.number(), to: z.number() });
+/**
+ * One parameter the answer changes: a primitive's field (`primitive` and `parameter`), or a named
+ * parameter (`parameter` is its name, no `primitive`; every field that refers to it moves with it).
+ */
+export const designChangeSchema = z.object({ primitive: z.string().optional(), parameter: z.string(), from: z.number(), to: z.number() });
 export type DesignChange = z.infer<typeof designChangeSchema>;
 
 /** Answer of a goal seek: the changed part document and its spin report. */
@@ -222,9 +255,12 @@ export const sweepPointSchema = z.object({
 });
 export type SweepPoint = z.infer<typeof sweepPointSchema>;
 
-/** Answer of a sweep: the grid values of each axis and the points in row-major order (the first axis varies slowest). */
+/**
+ * Answer of a sweep: the grid values of each axis (a named parameter as `parameter` without
+ * `primitive`, as in `changes`) and the points in row-major order (the first axis varies slowest).
+ */
 export const sweepAnswerSchema = z.object({
-  axes: z.array(z.object({ primitive: z.string(), parameter, values: z.array(z.number()) })),
+  axes: z.array(z.object({ primitive: z.string().optional(), parameter: z.string(), values: z.array(z.number()) })),
   figures: z.array(figure),
   points: z.array(sweepPointSchema),
 });

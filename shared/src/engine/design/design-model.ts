@@ -11,27 +11,46 @@ import { principalOfPart } from '../report/analyze-part';
 import { createPrincipalAxes, type PrincipalAxes } from '../principal/principal-axes';
 import {
   domainProblem,
+  followsParameter,
   parameterDomain,
+  parameterSlot,
   relationProblem,
+  resolveNamedParameter,
   resolveParameter,
   parameterValue,
   type ParameterDomain,
   type ParameterSlot,
 } from './design-parameters';
 
-/** One free parameter as the caller names it. */
+/**
+ * One free parameter as the caller names it: a primitive's field (`primitive` and `parameter`) or a
+ * named parameter of the part (`param`), as in design-targets.ts.
+ */
 export interface ParameterRef {
-  primitive: string;
-  parameter: DesignParameter;
+  primitive?: string;
+  parameter?: DesignParameter;
+  param?: string;
 }
 
-/** A free parameter resolved to its piece. */
-interface BoundParameter {
-  ref: ParameterRef;
-  /** Index into `changed`. */
+/** One field a free parameter sets: field = scale × value + offset (a primitive's own field: scale 1, offset 0). */
+export interface ParameterTarget {
+  /** Index into `changing`. */
   changed: number;
+  primitive: string;
+  field: DesignParameter;
   slot: ParameterSlot;
   domain: ParameterDomain;
+  scale: number;
+  offset: number;
+}
+
+/** A free parameter resolved to the pieces it moves. */
+export interface BoundParameter {
+  ref: ParameterRef;
+  /** The named parameter's name, or undefined for a primitive's field. */
+  name?: string;
+  /** The fields it sets: one for a primitive's field, every field that refers to a named parameter. */
+  targets: ParameterTarget[];
 }
 
 /** A piece whose body is recomputed at every evaluation. */
@@ -52,8 +71,10 @@ interface ChangingPiece {
  * no parameter touches are composed once; an evaluation recomputes only the changed pieces' bodies
  * (the closed forms of MECHANICS §1 at unit density, placed by placeSolid) and composes them with that fixed sum
  * (parallel-axis theorem, composeBodies). It mirrors what partMassProperties gives for the document
- * writeDesignParameter writes, including the document's semantics: a primitive given by its mass
- * keeps that mass when its dimensions change (its density follows).
+ * writeDesignParameter (or writeNamedParameter) writes, including the document's semantics: a
+ * primitive given by its mass keeps that mass when its dimensions change (its density follows). A
+ * named parameter is one free value that sets every field referring to it, so every piece with such
+ * a field is a changing piece.
  */
 export class DesignModel {
   readonly parameters: BoundParameter[] = [];
@@ -72,7 +93,9 @@ export class DesignModel {
 
   /**
    * Resolves `refs` on the document (EngineInputError naming `<where(i)>.primitive` or `.parameter`
-   * for an unknown primitive or a field it lacks). `mp` is partMassProperties(doc, …).
+   * for an unknown primitive, a field it lacks or a field that follows a named parameter, and
+   * `<where(i)>.param` for an unknown named parameter or one no field refers to). A named parameter
+   * moves every piece that refers to it. `mp` is partMassProperties(doc, …).
    */
   constructor(
     readonly doc: PartDocument,
@@ -82,13 +105,13 @@ export class DesignModel {
     private readonly equalMoments: number,
   ) {
     const changedIndex = new Map<number, number>();
-    refs.forEach((ref, i) => {
-      const { index, primitive, slot } = resolveParameter(doc, ref.primitive, ref.parameter, where(i));
+    const changingOf = (index: number): number => {
       let c = changedIndex.get(index);
       if (c === undefined) {
         c = this.changing.length;
         changedIndex.set(index, c);
         const piece = mp.pieces[index];
+        const primitive = doc.primitives[index];
         const given = primitive.shape === 'point' || primitive.mass !== undefined;
         this.changing.push({
           piece,
@@ -100,9 +123,45 @@ export class DesignModel {
           body: createBody(),
         });
       }
-      this.parameters.push({ ref, changed: c, slot, domain: parameterDomain(primitive, ref.parameter) });
+      return c;
+    };
+    const start: number[] = [];
+    refs.forEach((ref, i) => {
+      if (ref.param !== undefined) {
+        const { value, uses } = resolveNamedParameter(doc, ref.param, where(i));
+        const targets = uses.map((use): ParameterTarget => {
+          const slot = parameterSlot(use.primitive, use.field);
+          if (typeof slot === 'string') throw new EngineInputError('invalid', [{ path: `${where(i)}.param`, message: slot }]);
+          return {
+            changed: changingOf(use.index),
+            primitive: use.primitive.id,
+            field: use.field,
+            slot,
+            domain: parameterDomain(use.primitive, use.field, true),
+            scale: use.ref.scale,
+            offset: use.ref.offset,
+          };
+        });
+        this.parameters.push({ ref, name: ref.param, targets });
+        start.push(value);
+        return;
+      }
+      const { index, primitive, slot } = resolveParameter(doc, ref.primitive ?? '', ref.parameter!, where(i));
+      const followed = followsParameter(primitive, ref.parameter!);
+      if (followed) throw new EngineInputError('invalid', [{ path: `${where(i)}.parameter`, message: followed }]);
+      const target: ParameterTarget = {
+        changed: changingOf(index),
+        primitive: primitive.id,
+        field: ref.parameter!,
+        slot,
+        domain: parameterDomain(primitive, ref.parameter!),
+        scale: 1,
+        offset: 0,
+      };
+      this.parameters.push({ ref, targets: [target] });
+      start.push(parameterValue(primitive, ref.parameter!));
     });
-    this.start = Float64Array.from(refs, (ref, i) => parameterValue(this.changing[this.parameters[i].changed].primitive, ref.parameter));
+    this.start = Float64Array.from(start);
     const fixed = mp.pieces.filter((p) => !changedIndex.has(p.index)).map((p) => p.body);
     // Compose the fixed pieces once when their net mass is well away from zero; otherwise keep them apart.
     const net = fixed.reduce((s, b) => s + b.mass, 0),
@@ -140,23 +199,26 @@ export class DesignModel {
     }
     for (let i = 0; i < this.parameters.length; i++) {
       const q = this.parameters[i],
-        v = values[i];
-      const bad = domainProblem(q.domain, v);
-      if (bad) return `${q.ref.primitive}: ${q.ref.parameter} ${bad}`;
-      const c = this.changing[q.changed];
-      switch (q.slot.kind) {
-        case 'mass':
-          scratch.mass[q.changed] = v;
-          break;
-        case 'density':
-          scratch.density[q.changed] = v;
-          break;
-        case 'position':
-          c.position[q.slot.axis] = v;
-          break;
-        case 'dimension':
-          c.dims[q.slot.slot] = v;
-          break;
+        x = values[i];
+      for (const t of q.targets) {
+        const v = t.scale * x + t.offset;
+        const bad = domainProblem(t.domain, v);
+        if (bad) return q.name === undefined ? `${t.primitive}: ${t.field} ${bad}` : `${t.primitive}: ${t.field} ${bad} (${q.name} = ${x})`;
+        const c = this.changing[t.changed];
+        switch (t.slot.kind) {
+          case 'mass':
+            scratch.mass[t.changed] = v;
+            break;
+          case 'density':
+            scratch.density[t.changed] = v;
+            break;
+          case 'position':
+            c.position[t.slot.axis] = v;
+            break;
+          case 'dimension':
+            c.dims[t.slot.slot] = v;
+            break;
+        }
       }
     }
     for (let i = 0; i < this.changing.length; i++) {

@@ -1,5 +1,11 @@
 import type { DesignParameter } from '../../schemas/design-targets';
-import { MAX_DIMENSION, type PartDocument, type Primitive, type PrimitiveShape } from '../../schemas/part-document';
+import {
+  MAX_DIMENSION,
+  type ParameterReference,
+  type PartDocument,
+  type Primitive,
+  type PrimitiveShape,
+} from '../../schemas/part-document';
 import { EngineInputError } from '../part/engine-input-error';
 import { DIMENSION_NAMES } from '../part/primitive-dimensions';
 
@@ -86,13 +92,17 @@ export function parameterSlot(p: Primitive, parameter: DesignParameter): Paramet
   return { kind: 'dimension', slot };
 }
 
-/** The rule of the part document for a parameter's values on primitive `p`. */
-export function parameterDomain(p: Primitive, parameter: DesignParameter): ParameterDomain {
+/**
+ * The rule of the part document for a parameter's values on primitive `p`. A field that refers to a
+ * named parameter (`referenced`) keeps its schema rule exactly: its bore cannot become 0 (absent).
+ */
+export function parameterDomain(p: Primitive, parameter: DesignParameter, referenced = false): ParameterDomain {
   if (parameter === 'mass') return { lower: 0, lowerOpen: true, upper: MAX_MASS, unit: 'kg' };
   if (parameter === 'density') return { lower: 0, lowerOpen: true, upper: MAX_DENSITY, unit: 'kg/m³' };
   if (parameter.startsWith('position.')) return { lower: -ANYWHERE, lowerOpen: false, upper: ANYWHERE, unit: 'm' };
   // A bore or tip radius of 0 is the solid primitive; a capsule of straight length 0 is a sphere.
-  const zeroAllowed = ZERO_WHEN_ABSENT.has(parameter) || (p.shape === 'capsule' && parameter === 'length');
+  const zeroAllowed =
+    (ZERO_WHEN_ABSENT.has(parameter) && !(referenced && parameter === 'innerRadius')) || (p.shape === 'capsule' && parameter === 'length');
   return { lower: 0, lowerOpen: !zeroAllowed, upper: MAX_DIMENSION, unit: 'm' };
 }
 
@@ -189,6 +199,8 @@ export function readDesignParameter(doc: PartDocument, id: string, parameter: De
  */
 export function writeDesignParameter(doc: PartDocument, id: string, parameter: DesignParameter, value: number, where = ''): PartDocument {
   const { index, primitive } = resolveParameter(doc, id, parameter, where);
+  const followed = followsParameter(primitive, parameter);
+  if (followed) throw new EngineInputError('invalid', [{ path: at(where, 'parameter'), message: followed }]);
   const bad = domainProblem(parameterDomain(primitive, parameter), value);
   if (bad) throw new EngineInputError('invalid', [{ path: at(where, 'value'), message: `${parameter} ${bad}` }]);
   const next = withParameter(primitive, parameter, value);
@@ -198,6 +210,101 @@ export function writeDesignParameter(doc: PartDocument, id: string, parameter: D
   const primitives = doc.primitives.slice();
   primitives[index] = next;
   return { ...doc, primitives };
+}
+
+/**
+ * Why a primitive's field cannot be varied on its own because it refers to a named parameter
+ * (naming the parameter to vary instead), or null.
+ */
+export function followsParameter(p: Primitive, parameter: DesignParameter): string | null {
+  const ref = p.refs?.[parameter];
+  return ref
+    ? `${parameter} of ${p.id} follows the parameter "${ref.param}"; vary the parameter instead ({ "param": "${ref.param}" })`
+    : null;
+}
+
+/** A primitive field that refers to a named parameter. */
+export interface ParameterUse {
+  /** Index of the primitive in the document. */
+  index: number;
+  primitive: Primitive;
+  field: DesignParameter;
+  ref: ParameterReference;
+}
+
+/** Every primitive field that refers to the named parameter `name`, in document order. */
+export function usesOfParameter(doc: PartDocument, name: string): ParameterUse[] {
+  const uses: ParameterUse[] = [];
+  doc.primitives.forEach((primitive, index) => {
+    if (!primitive.refs) return;
+    for (const [field, ref] of Object.entries(primitive.refs) as [DesignParameter, ParameterReference][])
+      if (ref.param === name) uses.push({ index, primitive, field, ref });
+  });
+  return uses;
+}
+
+/**
+ * The value of the named parameter `name` and the fields that refer to it; throws
+ * EngineInputError('invalid') naming `<where>.param` when the part has no such parameter or no
+ * field refers to it (varying it would change nothing).
+ */
+export function resolveNamedParameter(doc: PartDocument, name: string, where = ''): { value: number; uses: ParameterUse[] } {
+  const params = doc.parameters ?? {};
+  if (!Object.hasOwn(params, name)) {
+    const names = Object.keys(params);
+    const shown =
+      names.length === 0 ? 'the part declares none' : `its parameters: ${names.slice(0, 8).join(', ')}${names.length > 8 ? ', …' : ''}`;
+    throw new EngineInputError('invalid', [{ path: at(where, 'param'), message: `is not a parameter of this part (${shown})` }]);
+  }
+  const uses = usesOfParameter(doc, name);
+  if (uses.length === 0)
+    throw new EngineInputError('invalid', [
+      { path: at(where, 'param'), message: `is not referred to by any primitive field, so varying it changes nothing` },
+    ]);
+  return { value: params[name], uses };
+}
+
+/** The value a field referring to a parameter takes when the parameter is `value`. */
+export function referencedValue(ref: ParameterReference, value: number): number {
+  return ref.scale * value + ref.offset;
+}
+
+/** A new document with the named parameter `name` set to `value` and every field that refers to it resolved again (no checks). */
+export function withNamedParameter(doc: PartDocument, name: string, value: number): PartDocument {
+  const primitives = doc.primitives.slice();
+  for (const use of usesOfParameter(doc, name)) {
+    primitives[use.index] = withParameter(primitives[use.index], use.field, referencedValue(use.ref, value));
+  }
+  return { ...doc, parameters: { ...doc.parameters, [name]: value }, primitives };
+}
+
+/**
+ * A new document with the named parameter `name` set to `value` (SI) and every field that refers to
+ * it resolved again. Throws EngineInputError('invalid') as resolveNamedParameter, and naming
+ * `<where>.value` when a resolved field breaks its rule or a relation of its primitive.
+ */
+export function writeNamedParameter(doc: PartDocument, name: string, value: number, where = ''): PartDocument {
+  const { uses } = resolveNamedParameter(doc, name, where);
+  if (!Number.isFinite(value)) throw new EngineInputError('invalid', [{ path: at(where, 'value'), message: 'must be a finite number' }]);
+  for (const use of uses) {
+    const v = referencedValue(use.ref, value);
+    const bad = domainProblem(parameterDomain(use.primitive, use.field, true), v);
+    if (bad)
+      throw new EngineInputError('invalid', [
+        { path: at(where, 'value'), message: `${name} = ${value} makes ${use.field} of ${use.primitive.id} ${v}, which ${bad}` },
+      ]);
+  }
+  const next = withNamedParameter(doc, name, value);
+  for (const index of new Set(uses.map((u) => u.index))) {
+    const p = next.primitives[index];
+    const relation = relationProblem(
+      p.shape,
+      DIMENSION_NAMES[p.shape].map((n) => fieldValue(p, n) ?? 0),
+    );
+    if (relation)
+      throw new EngineInputError('invalid', [{ path: at(where, 'value'), message: `${name} = ${value}: ${p.id}: ${relation}` }]);
+  }
+  return next;
 }
 
 /** A copy of `p` with one field set (no checks). */

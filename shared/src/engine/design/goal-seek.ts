@@ -16,8 +16,8 @@ import type { SpinReport } from '../report/spin-report';
 import { SeededRandom } from '../scatter/seeded-random';
 import { boundedLevenbergMarquardt, type BoundedProblem, type LeastSquaresResult } from './bounded-least-squares';
 import { checkFigureNames, figureContext, figuresFromBody, type DesignOptions } from './design-figures';
-import { DesignModel } from './design-model';
-import { domainProblem, relationProblem, withParameter } from './design-parameters';
+import { DesignModel, type BoundParameter } from './design-model';
+import { domainProblem, relationProblem, withNamedParameter, withParameter } from './design-parameters';
 
 /** What goalSeek is asked: the free parameters with their bounds and the targets (SI). */
 export interface GoalSeekRequest {
@@ -34,7 +34,7 @@ export interface GoalSeekResult {
   /** Its spin report. */
   report: SpinReport;
   achieved: AchievedTarget[];
-  /** The parameters that changed, in the order of `free`. */
+  /** The parameters that changed, in the order of `free` (a named parameter without `primitive`, its name as `parameter`). */
   changes: DesignChange[];
   /** Why not every target is met (closest, infeasible). */
   reason?: string;
@@ -85,11 +85,15 @@ const SEARCH_POINTS = 64;
  * starts and 64 seeded points) fails (e.g. a removal larger than what it cuts everywhere). Bounds
  * that merely keep a figure from its target give `closest`, with the bound active exactly.
  *
+ * A free named parameter (`{ param, min, max }`) moves every field that refers to it; the answer's
+ * part then holds its new value in `parameters` and every such field resolved again.
+ *
  * Throws EngineInputError('invalid') for a bad request: the settings' schema (paths `free[i].max`,
  * `targets[i].value`, …), an unknown primitive (`free[i].primitive`), a field the primitive lacks
- * (`free[i].parameter`), bounds outside the field's rule (`free[i].min`, `free[i].max`), a grip
- * figure on a part without grip (`targets[i].figure`); ('unanalysable') when the document itself
- * cannot be analysed.
+ * or one that follows a named parameter (`free[i].parameter`), an unknown named parameter or one no
+ * field refers to (`free[i].param`), bounds outside a field's rule (`free[i].min`, `free[i].max`),
+ * a grip figure on a part without grip (`targets[i].figure`); ('unanalysable') when the document
+ * itself cannot be analysed.
  */
 export function goalSeek(doc: PartDocument, request: GoalSeekRequest, options: DesignOptions = {}): GoalSeekResult {
   const parsed = goalSeekSettingsSchema.safeParse(request);
@@ -188,12 +192,16 @@ export function goalSeek(doc: PartDocument, request: GoalSeekRequest, options: D
   const f = measure(x)!;
   const achieved = achievedOf(targets, figures, f);
   let part = doc;
-  free.forEach((q, i) => {
-    if (x[i] !== model.start[i]) part = replaceParameter(part, q.primitive, q.parameter, x[i]);
-  });
   const changes: DesignChange[] = [];
   free.forEach((q, i) => {
-    if (x[i] !== model.start[i]) changes.push({ primitive: q.primitive, parameter: q.parameter, from: model.start[i], to: x[i] });
+    if (x[i] === model.start[i]) return;
+    if (q.param !== undefined) {
+      part = withNamedParameter(part, q.param, x[i]);
+      changes.push({ parameter: q.param, from: model.start[i], to: x[i] });
+    } else {
+      part = replaceParameter(part, q.primitive!, q.parameter!, x[i]);
+      changes.push({ primitive: q.primitive!, parameter: q.parameter!, from: model.start[i], to: x[i] });
+    }
   });
   const status: GoalSeekStatus = achieved.every((a) => a.met) ? 'met' : 'closest';
   const result: GoalSeekResult = { status, part, report: analyzeValidatedPart(part, options), achieved, changes };
@@ -235,15 +243,28 @@ function achievedOf(targets: DesignTarget[], figures: DesignFigure[], f: Float64
   });
 }
 
-/** Bounds outside the field's own rule (e.g. a negative radius) are refused, naming free[i].min or free[i].max. */
+/**
+ * Bounds outside a field's own rule (e.g. a negative radius) are refused, naming free[i].min or
+ * free[i].max. A named parameter's bound is checked through every field that refers to it; each
+ * field is linear in the parameter, so both bounds within the rule keep every value between them within it.
+ */
 function checkBounds(free: DesignFree[], model: DesignModel): void {
   const issues: InputIssue[] = [];
   free.forEach((q, i) => {
-    const domain = model.parameters[i].domain;
-    const low = domainProblem(domain, q.min),
-      high = domainProblem(domain, q.max);
-    if (low) issues.push({ path: `free[${i}].min`, message: `${low} (${q.parameter} of ${q.primitive})` });
-    if (high) issues.push({ path: `free[${i}].max`, message: `${high} (${q.parameter} of ${q.primitive})` });
+    const bound = model.parameters[i];
+    for (const end of ['min', 'max'] as const) {
+      for (const t of bound.targets) {
+        const v = t.scale * q[end] + t.offset;
+        const bad = domainProblem(t.domain, v);
+        if (!bad) continue;
+        issues.push({
+          path: `free[${i}].${end}`,
+          message:
+            bound.name === undefined ? `${bad} (${t.field} of ${t.primitive})` : `makes ${t.field} of ${t.primitive} ${v}, which ${bad}`,
+        });
+        break;
+      }
+    }
   });
   if (issues.length > 0) throw new EngineInputError('invalid', issues);
 }
@@ -251,17 +272,27 @@ function checkBounds(free: DesignFree[], model: DesignModel): void {
 /**
  * A relation between a primitive's fields (inner radius below radius, …) that fails at every point
  * within the bounds, or null. Each relation is monotone in each field, so it holds somewhere in the
- * box exactly when it holds at one of the corners of that primitive's free dimensions.
+ * box exactly when it holds at one of the corners of that primitive's free dimensions. A primitive
+ * moved by a named parameter is left to the sampled starts: one parameter may set two of its fields
+ * at once, and a corner is then no longer the best point.
  */
 function impossibleRelation(model: DesignModel, lower: Float64Array, upper: Float64Array): string | null {
   const byPiece = new Map<string, number[]>();
-  model.parameters.forEach((q, i) => {
-    if (q.slot.kind !== 'dimension') return;
-    const list = byPiece.get(q.ref.primitive) ?? [];
-    list.push(i);
-    byPiece.set(q.ref.primitive, list);
+  const named = new Set<string>();
+  model.parameters.forEach((q: BoundParameter, i) => {
+    for (const t of q.targets) {
+      if (t.slot.kind !== 'dimension') continue;
+      if (q.name !== undefined) {
+        named.add(t.primitive);
+        continue;
+      }
+      const list = byPiece.get(t.primitive) ?? [];
+      list.push(i);
+      byPiece.set(t.primitive, list);
+    }
   });
   for (const [id, list] of byPiece) {
+    if (named.has(id)) continue;
     const primitive = model.doc.primitives.find((p) => p.id === id)!;
     const base = model.pieceDimensions(id);
     let first: string | null = null;
@@ -269,7 +300,7 @@ function impossibleRelation(model: DesignModel, lower: Float64Array, upper: Floa
     for (let mask = 0; mask < 1 << list.length && !possible; mask++) {
       const d = [...base];
       list.forEach((i, b) => {
-        const slot = model.parameters[i].slot;
+        const slot = model.parameters[i].targets[0].slot;
         if (slot.kind === 'dimension') d[slot.slot] = mask & (1 << b) ? upper[i] : lower[i];
       });
       const problem = relationProblem(primitive.shape, d);
@@ -282,7 +313,7 @@ function impossibleRelation(model: DesignModel, lower: Float64Array, upper: Floa
 }
 
 /** The document with one parameter replaced (all values are checked together by the model beforehand). */
-function replaceParameter(doc: PartDocument, id: string, parameter: DesignFree['parameter'], value: number): PartDocument {
+function replaceParameter(doc: PartDocument, id: string, parameter: NonNullable<DesignFree['parameter']>, value: number): PartDocument {
   const primitives = doc.primitives.slice();
   const k = primitives.findIndex((p) => p.id === id);
   primitives[k] = withParameter(primitives[k], parameter, value);
@@ -313,8 +344,9 @@ function closestReason(achieved: AchievedTarget[], free: DesignFree[], x: Float6
   const held: string[] = [];
   for (let i = 0; i < n; i++) {
     const q = free[i];
-    if (x[i] === q.min) held.push(`${q.primitive} ${q.parameter} at its min ${Number(q.min.toPrecision(6))}`);
-    else if (x[i] === q.max) held.push(`${q.primitive} ${q.parameter} at its max ${Number(q.max.toPrecision(6))}`);
+    const what = q.param !== undefined ? `the parameter ${q.param}` : `${q.primitive} ${q.parameter}`;
+    if (x[i] === q.min) held.push(`${what} at its min ${Number(q.min.toPrecision(6))}`);
+    else if (x[i] === q.max) held.push(`${what} at its max ${Number(q.max.toPrecision(6))}`);
   }
   const bounds = held.length > 0 ? ` Held at a bound: ${held.join('; ')}.` : '';
   return `Not every target can be met within the bounds: ${misses.join('; ')}. This is the closest least-squares compromise.${bounds}`;

@@ -29,7 +29,8 @@ export function gridValues(from: number, to: number, steps: number): number[] {
  * A point whose values make the part invalid (a field outside its rule, inner radius ≥ radius,
  * removals that leave no mass, …) gets verdict, axis and figures null and a short `error`; a centre
  * of percussion that does not exist is null. Each point recomputes only the swept primitives
- * (DesignModel). Throws EngineInputError('invalid') for a bad request (paths `axes[i].steps`,
+ * (DesignModel); an axis over a named parameter (`{ param, from, to, steps }`) moves every field
+ * that refers to it, and appears in the answer's axes as `{ parameter: name }` without `primitive`. Throws EngineInputError('invalid') for a bad request (paths `axes[i].steps`,
  * `axes[i].primitive`, `axes[i].parameter`, `figures[i]`, …) and ('unanalysable') when the document
  * itself cannot be analysed.
  */
@@ -74,5 +75,13 @@ export function sweepDesign(
     }
     if (onProgress && ((k + 1) % every === 0 || k + 1 === total)) onProgress(k + 1, total);
   }
-  return { axes: axes.map((a, i) => ({ primitive: a.primitive, parameter: a.parameter, values: grids[i] })), figures, points };
+  return {
+    axes: axes.map((a, i) =>
+      a.param !== undefined
+        ? { parameter: a.param, values: grids[i] }
+        : { primitive: a.primitive!, parameter: a.parameter!, values: grids[i] },
+    ),
+    figures,
+    points,
+  };
 }

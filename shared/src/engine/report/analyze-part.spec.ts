@@ -24,15 +24,20 @@ describe('analyzePart', () => {
     );
     expect(Object.keys(r.spin).sort()).toEqual(
       [
+        'coneHalfAngleDeg',
         'eFoldingTime',
         'explanation',
+        'flightTime',
+        'flightTimeSource',
         'flipTime',
         'growthRate',
         'margins',
         'misalignmentDeg',
+        'motionAxis',
         'nearestAxis',
         'verdict',
         'wobbleFrequency',
+        'wobblePeriod',
       ].sort(),
     );
     expect(Object.keys(r.trade)).toEqual(expect.arrayContaining(['balancePoint', 'swingweight', 'recoilWeight', 'twistweight']));

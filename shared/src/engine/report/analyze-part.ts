@@ -15,6 +15,7 @@ import {
   type PrincipalAxes,
 } from '../principal/principal-axes';
 import { assessSpin } from '../spin/assess-spin';
+import { resolveFlightTime } from '../spin/flight-time';
 import type { VerdictThresholds } from '../spin/verdict-thresholds';
 import { BAT_PIVOT_DISTANCE, radiusOfGyration, tradeFigures } from '../trade/trade-figures';
 import { STANDARD_NOTES } from './report-notes';
@@ -88,6 +89,7 @@ function buildReport(doc: PartDocument, mp: PartMassProperties, principal: Princ
     misalignmentDeg: doc.spin.misalignmentDeg,
     dissipative: doc.dissipative,
     thresholds: options.thresholds,
+    flight: resolveFlightTime(doc.flightTime, options.category ?? doc.category),
   });
   const grip = doc.grip ?? null;
   const pivotDistance = options.pivotDistance ?? grip?.pivotDistance ?? BAT_PIVOT_DISTANCE;

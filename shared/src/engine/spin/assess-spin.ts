@@ -1,17 +1,24 @@
+import { exactTorqueFree } from '../motion/exact-torque-free';
 import type { PrincipalAxes } from '../principal/principal-axes';
-import { intermediateFlipTime } from './flip-time';
-import { intermediateGrowthRate } from './growth-rate';
 import { classifySpin, type AxisRole } from './classify-spin';
+import { explainSpin } from './explain-spin';
+import type { FlightTime, FlightTimeSource } from './flight-time';
+import { firstReversal } from './flip-time';
+import { intermediateGrowthRate } from './growth-rate';
+import { motionShape, type MotionAxis } from './motion-axis';
+import { spinVerdict } from './spin-verdict';
+import { nearestIndex, statedStart } from './stated-start';
 import { DEFAULT_VERDICT_THRESHOLDS, type Verdict, type VerdictThresholds } from './verdict-thresholds';
-import { wobbleFrequency } from './wobble-frequency';
+import { wobblePeriod } from './wobble-period';
 
-export type { AxisRole };
+export type { AxisRole, MotionAxis, FlightTimeSource };
 
 /** The spin part of a spin report (SI: rad/s, 1/s, s; angles in degrees). */
 export interface SpinAssessment {
   nearestAxis: AxisRole;
   /** Angle between the intended axis and the nearest principal axis (or the plane of an equal pair), degrees. */
   misalignmentDeg: number;
+  /** Follows the motion (motionAxis), the flight time and the rules of VerdictThresholds. */
   verdict: Verdict;
   /** major = (I1 − I2)/I2, minor = (I2 − I3)/I2. */
   margins: { major: number; minor: number };
@@ -19,10 +26,20 @@ export interface SpinAssessment {
   growthRate: number | null;
   /** 1/λ (s) for an intermediate axis, else null. */
   eFoldingTime: number | null;
-  /** Predicted time to the first flip from the stated misalignment (s), intermediate axis only. */
+  /** Predicted time to the first turn-over from the stated start (s), when the part turns over; else null. */
   flipTime: number | null;
-  /** Body-frame wobble angular frequency (rad/s) for a major or minor axis, else null. */
+  /** 2π/wobblePeriod (rad/s) when the motion stays about the nearest (major or minor) axis; 0 with no restoring wobble (equal moments); else null. */
   wobbleFrequency: number | null;
+  /** The principal axis the body-frame angular momentum circles from the stated start, or the separatrix (from G² against 2T·I2). */
+  motionAxis: MotionAxis;
+  /** Largest angle of the angular momentum from motionAxis over the motion, in the body (degrees); null on the separatrix. */
+  coneHalfAngleDeg: number | null;
+  /** Period of the body-frame motion from the exact solution (s): the polhode closes once; null where it does not repeat. */
+  wobblePeriod: number | null;
+  /** Time in the air the flip is compared with (s), or null when unknown. */
+  flightTime: number | null;
+  /** Where flightTime comes from: the part document, or its category's common practice estimate. */
+  flightTimeSource: FlightTimeSource;
   /** Plain-language explanation for the UI. */
   explanation: string;
 }
@@ -38,72 +55,101 @@ export interface SpinInput {
   misalignmentDeg: number;
   dissipative: boolean;
   thresholds?: Partial<VerdictThresholds>;
+  /** Time in the air and where it comes from (resolveFlightTime); default unknown. */
+  flight?: FlightTime;
 }
 
-const fmt = (x: number, digits = 3) => Number(x.toPrecision(digits)).toString();
-const pct = (x: number) => `${fmt(100 * x, 3)} %`;
+const ROLE_INDEX: Record<AxisRole, 0 | 1 | 2> = { major: 0, intermediate: 1, minor: 2 };
+const ROLES: readonly AxisRole[] = ['major', 'intermediate', 'minor'];
+const NO_FLIGHT: FlightTime = { flightTime: null, source: null, categoryDefault: null };
 
 /**
- * The verdict for spin about an intended axis, with margins, growth rate, flip time, wobble and a
- * plain-language explanation, following the rules of VerdictThresholds (documented there).
- * Also returns notes (the major-axis rule for a dissipative part about its minor axis).
+ * The verdict for spin about an intended axis, following the motion that actually happens: from the
+ * stated start (statedStart: the intended axis, at least `misalignmentDeg` from its nearest principal
+ * axis) the conserved G² and 2T say which axis the motion circles (motionShape), the exact solution
+ * gives the wobble period and the first turn-over, and a turn-over after the flight ends is not seen.
+ * Margins, growth rate and a plain-language explanation come with it, and notes (the major-axis
+ * rule for a dissipative part whose motion circles its minor axis).
  */
 export function assessSpin(input: SpinInput): { spin: SpinAssessment; notes: string[] } {
   const t = { ...DEFAULT_VERDICT_THRESHOLDS, ...input.thresholds };
+  const flight = input.flight ?? NO_FLIGHT;
   const I = input.principal.moments;
   const [i1, i2, i3] = [I[0], I[1], I[2]];
   const margins = { major: (i1 - i2) / i2, minor: (i2 - i3) / i2 };
-  const notes: string[] = [];
   const rate = input.rate;
   const c = classifySpin(input.principal, input.axis, input.dissipative, t);
-  const { nearestAxis, misalignmentDeg, verdict, inBody: b } = c;
+  const { nearestAxis, misalignmentDeg } = c;
+  const equalPairs = input.principal.equalPairs;
+  // With an equal pair the nearest role names the pair, not one axis: take the nearest single axis there.
+  const about = c.neutral || c.spherical ? nearestIndex(c.inBody) : ROLE_INDEX[nearestAxis];
+  const w0 = statedStart(c.inBody, rate, input.misalignmentDeg, about);
+  const shape = motionShape(I, equalPairs, w0);
+  const exact = equalPairs[0] || equalPairs[1] ? null : exactTorqueFree(I, w0);
+  const period = wobblePeriod(I, shape, w0, exact);
+  const turnsOver = !c.spherical && !c.neutral && (nearestAxis === 'intermediate' || shape.motionAxis !== nearestAxis);
+
   let growthRate: number | null = null,
-    eFoldingTime: number | null = null,
     flipTime: number | null = null,
     wobble: number | null = null;
-  let explanation: string;
-  if (c.spherical) {
-    wobble = 0;
-    explanation =
-      'All three principal moments are equal (spherical inertia): every axis is a principal axis and spin about any of them stays as it is.';
-  } else if (c.neutral) {
-    wobble = 0;
-    explanation =
-      `The intended axis lies ${fmt(misalignmentDeg, 2)}° from the plane of two equal principal moments. ` +
-      'Spin there is neutral: it does not flip over, but nothing pulls it back either, so a small disturbance makes the part drift slowly about its symmetry axis.';
-  } else if (nearestAxis === 'intermediate') {
-    growthRate = intermediateGrowthRate(i1, i2, i3, rate);
-    eFoldingTime = 1 / growthRate;
-    const f = intermediateFlipTime(I, b, rate, input.misalignmentDeg);
-    flipTime = f.flipTime;
-    explanation =
-      `The intended axis is ${fmt(misalignmentDeg, 2)}° from the intermediate principal axis. Spin about it is unstable: ` +
-      `a small misalignment grows e-fold every ${fmt(eFoldingTime)} s (growth rate ${fmt(growthRate)} 1/s)` +
-      (flipTime !== null
-        ? `, and from a ${fmt(Math.max(input.misalignmentDeg, misalignmentDeg), 2)}° misalignment the part turns over after about ${fmt(flipTime)} s, then again every ${fmt(f.flipInterval!)} s.`
-        : '.') +
-      ' To make it steady, move the moment about this axis clearly above or below the other two.';
-  } else {
-    const r = nearestAxis === 'major' ? 0 : 2;
-    const [j, k] = r === 0 ? [i2, i3] : [i1, i2];
-    wobble = wobbleFrequency(I[r], j, k, rate);
-    const reasons: string[] = [];
-    if (c.closeness < t.watchMomentFraction) reasons.push(`the moment about it is within ${pct(c.closeness)} of the intermediate moment`);
-    if (misalignmentDeg > t.watchMisalignmentDeg) reasons.push(`it is ${fmt(misalignmentDeg, 2)}° away from the ${nearestAxis} axis`);
-    explanation =
-      `The intended axis is ${fmt(misalignmentDeg, 2)}° from the ${nearestAxis} principal axis, about which spin is steady: ` +
-      `a small misalignment makes the part wobble at ${fmt(wobble / (2 * Math.PI))} Hz in its own frame without growing. ` +
-      `Margin to the intermediate moment: ${pct(r === 0 ? margins.major : margins.minor)}.` +
-      (reasons.length > 0 ? ` Watch it: ${reasons.join(', and ')}; tolerances or a flexing part could change its behaviour.` : '');
-  }
-  if (input.dissipative && nearestAxis === 'minor') {
+  if (nearestAxis === 'intermediate' && !c.neutral && !c.spherical) growthRate = intermediateGrowthRate(i1, i2, i3, rate);
+  if (turnsOver) flipTime = exact ? firstReversal(exact, ROLE_INDEX[nearestAxis]) : null;
+  else if (c.spherical || c.neutral) wobble = 0;
+  else wobble = period !== null ? (2 * Math.PI) / period : null;
+  const flipInterval = turnsOver && period !== null ? period / 2 : null;
+
+  const verdict = spinVerdict({
+    spin: c,
+    motionAxis: shape.motionAxis,
+    turnsOver,
+    flipTime,
+    flightTime: flight.flightTime,
+    dissipative: input.dissipative,
+    thresholds: t,
+  });
+  const explanation = explainSpin({
+    nearestAxis,
+    misalignmentDeg,
+    statedMisalignmentDeg: input.misalignmentDeg,
+    spherical: c.spherical,
+    neutral: c.neutral,
+    closeness: c.closeness,
+    margins,
+    motionAxis: shape.motionAxis,
+    coneHalfAngleDeg: shape.coneHalfAngleDeg,
+    symmetryAxis: shape.symmetryAxis === null ? null : ROLES[shape.symmetryAxis],
+    wobblePeriod: period,
+    turnsOver,
+    growthRate,
+    flipTime,
+    flipInterval,
+    flight,
+    thresholds: t,
+  });
+  const notes: string[] = [];
+  if (input.dissipative && shape.motionAxis === 'minor') {
     notes.push(
-      'Major-axis rule: this part is marked dissipative (it flexes or carries loose or liquid content) and spins about its minor axis. ' +
+      'Major-axis rule: this part is marked dissipative (it flexes or carries loose or liquid content) and its spin circles its minor axis. ' +
         'Internal losses keep the angular momentum but drain energy, so over time the spin drifts to the major axis.',
     );
   }
   return {
-    spin: { nearestAxis, misalignmentDeg, verdict, margins, growthRate, eFoldingTime, flipTime, wobbleFrequency: wobble, explanation },
+    spin: {
+      nearestAxis,
+      misalignmentDeg,
+      verdict,
+      margins,
+      growthRate,
+      eFoldingTime: growthRate !== null && growthRate > 0 ? 1 / growthRate : null,
+      flipTime,
+      wobbleFrequency: wobble,
+      motionAxis: shape.motionAxis,
+      coneHalfAngleDeg: shape.coneHalfAngleDeg,
+      wobblePeriod: period,
+      flightTime: flight.flightTime,
+      flightTimeSource: flight.source,
+      explanation,
+    },
     notes,
   };
 }

@@ -1,6 +1,5 @@
-import { exactTorqueFree } from '../motion/exact-torque-free';
-
-const DEG = Math.PI / 180;
+import { exactTorqueFree, type ExactTorqueFree } from '../motion/exact-torque-free';
+import { statedStart } from './stated-start';
 
 /**
  * Time (s) from the start until spin about the intermediate axis first turns the part over — the
@@ -11,8 +10,8 @@ const DEG = Math.PI / 180;
  * intended axis's components along the principal axes (unit), misalignment in degrees.
  * The start is the intended axis itself if it is at least `misalignmentDeg` from the intermediate
  * axis; otherwise the intermediate axis tilted by `misalignmentDeg` toward the intended axis's
- * offset (or toward the major axis when there is none). Returns nulls when the moments are not
- * distinct or the start lies exactly on the separatrix.
+ * offset (or toward the major axis when there is none) — statedStart. Returns nulls when the moments
+ * are not distinct or the start lies exactly on the separatrix.
  */
 export function intermediateFlipTime(
   moments: ArrayLike<number>,
@@ -20,22 +19,25 @@ export function intermediateFlipTime(
   rate: number,
   misalignmentDeg: number,
 ): { flipTime: number | null; flipInterval: number | null } {
-  const s = axisInBody[1] >= 0 ? 1 : -1;
-  let w0: number[];
-  const perp = Math.hypot(axisInBody[0], axisInBody[2]);
-  const geometric = Math.atan2(perp, Math.abs(axisInBody[1]));
-  if (geometric >= misalignmentDeg * DEG) {
-    w0 = [rate * axisInBody[0], rate * axisInBody[1], rate * axisInBody[2]];
-  } else {
-    const tx = perp > 1e-12 ? axisInBody[0] / perp : 1;
-    const tz = perp > 1e-12 ? axisInBody[2] / perp : 0;
-    const c = Math.cos(misalignmentDeg * DEG),
-      sn = Math.sin(misalignmentDeg * DEG);
-    w0 = [rate * sn * tx, rate * s * c, rate * sn * tz];
-  }
-  const exact = exactTorqueFree(moments, w0);
+  const exact = exactTorqueFree(moments, statedStart(axisInBody, rate, misalignmentDeg, 1));
   if (!exact || !Number.isFinite(exact.period)) return { flipTime: null, flipInterval: null };
   return { flipTime: exact.firstIntermediateCrossing(), flipInterval: exact.period / 2 };
+}
+
+/**
+ * Time (s) of the first sign change, strictly after t = 0, of the body-frame ω component along the
+ * principal axis `index` (into the moments as given to exactTorqueFree): the moment the part has
+ * turned over about that axis relative to its angular momentum. In the elliptic solution (Landau &
+ * Lifshitz §37) the intermediate component goes as sn(u), zero at u = 2nK; the component along the
+ * outer axis the motion does not circle as cn(u), zero at u = (2n + 1)K; the circled one as dn(u),
+ * which never vanishes (null). u = ν·t + u0.
+ */
+export function firstReversal(exact: ExactTorqueFree, index: number): number | null {
+  const K = exact.quarter;
+  if (index === exact.circledAxis || !Number.isFinite(K)) return null;
+  const shift = index === exact.intermediateAxis ? 0 : K;
+  const n = Math.floor((exact.u0 - shift) / (2 * K)) + 1;
+  return (2 * K * n + shift - exact.u0) / exact.nu;
 }
 
 /**
