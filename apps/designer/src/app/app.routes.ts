@@ -40,6 +40,18 @@ export const routes: Routes = [
     loadComponent: () => import('./features/scatter/scatter-study').then((m) => m.ScatterStudyPage),
   },
   {
+    path: 'projects/:projectId/parts/:partId/goal-seek',
+    title: 'Goal seek · Tumblewise',
+    canActivate: [requireSession],
+    loadComponent: () => import('./features/goal-seek/goal-seek').then((m) => m.GoalSeekPage),
+  },
+  {
+    path: 'projects/:projectId/parts/:partId/parameter-map',
+    title: 'Parameter map · Tumblewise',
+    canActivate: [requireSession],
+    loadComponent: () => import('./features/parameter-map/parameter-map').then((m) => m.ParameterMapPage),
+  },
+  {
     path: 'projects/:projectId/parts/:partId/measurements',
     title: 'Measured data · Tumblewise',
     canActivate: [requireSession],

@@ -1,5 +1,14 @@
-import { BarChart, LineChart } from 'echarts/charts';
-import { AriaComponent, GridComponent, LegendComponent, MarkLineComponent, TitleComponent, TooltipComponent } from 'echarts/components';
+import { BarChart, HeatmapChart, LineChart, ScatterChart } from 'echarts/charts';
+import {
+  AriaComponent,
+  GridComponent,
+  LegendComponent,
+  MarkAreaComponent,
+  MarkLineComponent,
+  TitleComponent,
+  TooltipComponent,
+  VisualMapPiecewiseComponent,
+} from 'echarts/components';
 import * as echarts from 'echarts/core';
 import { SVGRenderer } from 'echarts/renderers';
 
@@ -7,11 +16,15 @@ import { SVGRenderer } from 'echarts/renderers';
 echarts.use([
   LineChart,
   BarChart,
+  HeatmapChart,
+  ScatterChart,
   GridComponent,
   TooltipComponent,
   LegendComponent,
   TitleComponent,
   MarkLineComponent,
+  MarkAreaComponent,
+  VisualMapPiecewiseComponent,
   AriaComponent,
   SVGRenderer,
 ]);

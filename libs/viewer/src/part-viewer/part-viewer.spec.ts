@@ -221,6 +221,20 @@ describe('TwPartViewer', () => {
     expect(testId('tumble-waiting')).toBeNull();
   });
 
+  it('marks where the flight ends on the time axis, and says so beside the time read-out', async () => {
+    await open(SIMULATION);
+    expect(testId('tumble-flight')).toBeNull(); // the demo racket names no category and no flight time
+    fixture.componentRef.setInput('report', analyzeValidatedPart({ ...PRACTICE_RACKET, flightTime: 1.5 }));
+    await fixture.whenStable();
+    expect(testId('tumble-flight')!.textContent!.trim()).toBe('Flight ends at 1.5 s (set for this part)');
+    // 1.5 s of the 4 s run: the tick sits at that fraction of the track.
+    expect(Number(testId('tumble-flight-tick')!.style.getPropertyValue('--tw-at'))).toBeCloseTo(1.5 / 4, 12);
+    fixture.componentRef.setInput('report', analyzeValidatedPart({ ...PRACTICE_RACKET, flightTime: 9 }));
+    await fixture.whenStable();
+    expect(testId('tumble-flight')!.textContent!.trim()).toBe('Flight of 9 s (set for this part) lasts beyond this preview');
+    expect(testId('tumble-flight-tick')).toBeNull();
+  });
+
   it('frees the renderers and geometries when destroyed', async () => {
     await open(SIMULATION);
     const disposed = jest.spyOn(BufferGeometry.prototype, 'dispose');

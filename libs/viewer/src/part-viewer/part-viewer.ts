@@ -174,9 +174,24 @@ export class TwPartViewer {
     const t = this.track();
     return t ? trackDuration(t) : 0;
   });
+  /** Time in the air from the report (s); reports stored before it was computed have none. */
+  private readonly flightTime = computed(() => this.report().spin.flightTime ?? null);
   protected readonly omegaOptions = computed(() => {
     const t = this.track();
-    return t ? omegaChartOptions(t) : null;
+    return t ? omegaChartOptions(t, this.flightTime()) : null;
+  });
+  /** Where the flight ends on the preview's time axis (per cent of the run, null beyond it) and what the read-out says. */
+  protected readonly flightMark = computed(() => {
+    const flight = this.flightTime();
+    if (flight === null) return null;
+    const duration = this.duration();
+    const seconds = Number(flight.toPrecision(3));
+    const basis = this.report().spin.flightTimeSource === 'part' ? 'set for this part' : 'category default, a common practice estimate';
+    const inside = duration > 0 && flight <= duration;
+    return {
+      percent: inside ? (100 * flight) / duration : null,
+      label: inside ? `Flight ends at ${seconds} s (${basis})` : `Flight of ${seconds} s (${basis}) lasts beyond this preview`,
+    };
   });
   protected readonly summary = computed(() => tumbleSummary(this.report(), this.track(), this.misalignment()));
   protected readonly canvasLabel = computed(() => {

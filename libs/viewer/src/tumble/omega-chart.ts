@@ -8,12 +8,19 @@ export const OMEGA_CHART_POINTS = 1500;
 
 const SERIES_NAMES = ['ω1 (major)', 'ω2 (intermediate)', 'ω3 (minor)'];
 
+/** Colour of the end-of-flight line: a neutral grey apart from the three axis colours. */
+const FLIGHT_LINE_COLOUR = '#5d6d7e';
+
 /**
  * Line chart of the body-frame angular velocity components over time (rad/s against s), one
- * series per principal axis in the legend's colours. Pure: the same simulation gives the same option.
+ * series per principal axis in the legend's colours. With a flight time (s) inside the run, a
+ * dashed vertical line marks where the flight ends. Pure: the same input gives the same option.
  */
-export function omegaChartOptions(sim: Pick<SimulationResult, 'times' | 'omega'>): EChartsCoreOption {
+export function omegaChartOptions(sim: Pick<SimulationResult, 'times' | 'omega'>, flightTime: number | null = null): EChartsCoreOption {
   const n = sim.times.length;
+  const end = n ? sim.times[n - 1] : 0;
+  const flight = flightTime !== null && flightTime > 0 && flightTime <= end ? flightTime : null;
+  const flightLabel = flight === null ? '' : `flight ends, ${Number(flight.toPrecision(3))} s`;
   const stride = Math.max(1, Math.ceil(n / OMEGA_CHART_POINTS));
   const picks: number[] = [];
   for (let i = 0; i < n; i += stride) picks.push(i);
@@ -23,7 +30,11 @@ export function omegaChartOptions(sim: Pick<SimulationResult, 'times' | 'omega'>
     textStyle: CHART_TEXT,
     aria: {
       enabled: true,
-      label: { description: 'Angular velocity components ω1, ω2 and ω3 in the body frame, in rad/s, against time in seconds.' },
+      label: {
+        description:
+          'Angular velocity components ω1, ω2 and ω3 in the body frame, in rad/s, against time in seconds.' +
+          (flight === null ? '' : ` A dashed line marks the end of the flight at ${Number(flight.toPrecision(3))} s.`),
+      },
     },
     legend: { top: 0, textStyle: CHART_TEXT },
     grid: { left: 56, right: 16, top: 36, bottom: 40 },
@@ -45,6 +56,17 @@ export function omegaChartOptions(sim: Pick<SimulationResult, 'times' | 'omega'>
       lineStyle: { width: 1.5 },
       color: VIEWER_COLOURS[role],
       data: picks.map((i) => [sim.times[i], sim.omega[i][k]]),
+      ...(k === 0 && flight !== null
+        ? {
+            markLine: {
+              silent: true,
+              symbol: 'none',
+              lineStyle: { color: FLIGHT_LINE_COLOUR, type: 'dashed', width: 1.5 },
+              label: { formatter: flightLabel, position: 'insideEndTop', ...CHART_TEXT },
+              data: [{ xAxis: flight }],
+            },
+          }
+        : {}),
     })),
   };
 }

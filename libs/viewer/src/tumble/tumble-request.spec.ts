@@ -25,6 +25,13 @@ describe('tumbleRequest', () => {
     expect(r.sampleRate * period).toBeGreaterThanOrEqual(24 - 1e-2);
   });
 
+  it('runs past the end of the flight, so the flight mark shows on the time axis', () => {
+    const withFlight = (flightTime: number | null) => ({ spin: { growthRate: null, flightTime } }) as unknown as SpinReport;
+    expect(tumbleRequest(doc(31.4), withFlight(30), 1).seconds).toBeGreaterThanOrEqual(30 * 1.25 - 1e-3);
+    expect(tumbleRequest(doc(31.4), withFlight(null), 1).seconds).toBe(tumbleRequest(doc(31.4), report(null), 1).seconds);
+    expect(tumbleRequest(doc(31.4), withFlight(600), 1).seconds).toBeLessThanOrEqual(120);
+  });
+
   it('stays within the sample budget for a fast spin, keeping at least 8 samples per turn', () => {
     const rate = 600; // rad/s
     const r = tumbleRequest(doc(rate), report(0.002 * rate), 0.1);

@@ -17,7 +17,8 @@ export const SAMPLES_PER_TURN = 24;
 /**
  * What to simulate for the preview: long enough to see about three flips of a spin near the
  * intermediate axis (estimated from the growth rate: a misalignment θ grows like θ·e^{λt}, so it
- * reaches order one after about ln(1/θ)/λ), otherwise twelve spin periods; between 2 s and 120 s;
+ * reaches order one after about ln(1/θ)/λ), otherwise twelve spin periods, and past the end of the
+ * report's flight time so its mark shows on the time axis; between 2 s and 120 s;
  * sampled at 24 samples per spin revolution (at least 30 /s, at most the engine's 2000 /s), thinned if
  * the budget is exceeded, but not below 8 samples per revolution where 2000 /s allow (the duration is
  * shortened instead).
@@ -28,7 +29,8 @@ export function tumbleRequest(part: PartDocument, report: SpinReport, misalignme
   const theta = Math.max(1e-6, (misalignmentDeg * Math.PI) / 180);
   const lambda = report.spin.growthRate;
   const flipEstimate = lambda && lambda > 0 ? Math.log(1 / theta) / lambda : 0;
-  let seconds = clamp(Math.max(12 * period, 3 * flipEstimate), 2, 120);
+  const flight = report.spin.flightTime ?? 0;
+  let seconds = clamp(Math.max(12 * period, 3 * flipEstimate, 1.25 * flight), 2, 120);
   let sampleRate = clamp(SAMPLES_PER_TURN / period, 30, 2000);
   if (seconds * sampleRate > PREVIEW_SAMPLE_BUDGET) sampleRate = Math.max(PREVIEW_SAMPLE_BUDGET / seconds, Math.min(2000, 8 / period));
   if (seconds * sampleRate > PREVIEW_SAMPLE_BUDGET) seconds = PREVIEW_SAMPLE_BUDGET / sampleRate;

@@ -35,7 +35,7 @@ import { SpinReportPanel } from '../spin-report/spin-report-panel';
 import { VariantHistory } from '../variant-history/variant-history';
 import { autosaveDrafts } from './autosave-drafts';
 import { analysisRequest, documentIssues, messageForField, withMaterialDensities, type FieldIssues } from './document-issues';
-import { toDraftDocument, type DraftDocument } from './draft-document';
+import { toDraftDocument, withResolvedReferences, type DraftDocument } from './draft-document';
 import { IDLE_ANALYSIS, liveAnalysis, type LiveAnalysis } from './live-analysis';
 import { PartEditorState } from './part-editor-state';
 import { MAX_IMPORT_BYTES, parsePartFile, partFileName, partFileText } from './part-file';
@@ -212,7 +212,8 @@ export class PartEditor {
   /** Material references become densities, so the viewer's motion request needs no workspace lookup. */
   protected readonly shownDocument = computed<PartDocument | null>(() => {
     const doc = (this.openedVariant()?.document ?? this.analysis().analysed) as DraftDocument | null;
-    return doc ? (withMaterialDensities(doc, this.materialMap()) as unknown as PartDocument) : null;
+    // Parameter references become their numbers too: the viewer draws plain values.
+    return doc ? (withResolvedReferences(withMaterialDensities(doc, this.materialMap())) as unknown as PartDocument) : null;
   });
   protected readonly shownRate = computed(() => {
     const opened = this.openedVariant();

@@ -85,31 +85,70 @@ export function primitiveToFormValue(p: DraftPrimitive): PrimitiveFormValue {
   return value;
 }
 
+/** A named-parameter reference written in a field (`{ "param": "hoopRadius", "scale"?, "offset"? }`), or null. */
+export function referenceIn(value: unknown): { param: string; scale?: number; offset?: number } | null {
+  if (value === null || typeof value !== 'object' || Array.isArray(value)) return null;
+  const param = (value as Record<string, unknown>)['param'];
+  return typeof param === 'string' ? (value as { param: string; scale?: number; offset?: number }) : null;
+}
+
+/** The value `base` holds at a control's path (`radius`, `size[1]`), for keeping a reference there. */
+function heldAt(base: DraftPrimitive, key: string, component?: number): unknown {
+  const v = base[key];
+  return component === undefined ? v : Array.isArray(v) ? (v as unknown[])[component] : undefined;
+}
+
+/**
+ * The controls whose field refers to a named parameter, by control name (`radius`, `size_1`,
+ * `position_2`, `mass`, `density`), with a short description: "the parameter hoopRadius",
+ * "2 × hoopRadius + 0.01 (SI)". Such a control shows empty; typing a number replaces the reference.
+ */
+export function referencedControls(p: DraftPrimitive): Record<string, string> {
+  const out: Record<string, string> = {};
+  const describe = (v: unknown, name: string) => {
+    const r = referenceIn(v);
+    if (!r) return;
+    const scale = typeof r.scale === 'number' && r.scale !== 1 ? `${r.scale} × ` : '';
+    const offset = typeof r.offset === 'number' && r.offset !== 0 ? ` ${r.offset < 0 ? '−' : '+'} ${Math.abs(r.offset)}` : '';
+    out[name] = scale || offset ? `${scale}${r.param}${offset} (SI)` : `the parameter ${r.param}`;
+  };
+  for (const key of ['mass', 'density']) describe(p[key], key);
+  for (const field of SHAPE_FIELDS[p.shape] ?? []) {
+    if (field.components) field.components.forEach((_, i) => describe(heldAt(p, field.key, i), `${field.key}_${i}`));
+    else describe(p[field.key], field.key);
+  }
+  for (let i = 0; i < 3; i++) describe(heldAt(p, 'position', i), `position_${i}`);
+  return out;
+}
+
 /**
  * The primitive the form describes, in SI, built on `base` so fields the form does not show stay.
  * Empty required dimensions become null (the schema names them); empty optional ones are left out;
  * empty placement components count as 0. Exactly one of materialId, density and mass is written.
+ * A field that refers to a named parameter shows empty and keeps its reference while it stays
+ * empty; a number typed there replaces the reference.
  */
 export function formValueToPrimitive(value: PrimitiveFormValue, base: DraftPrimitive): DraftPrimitive {
   const out: DraftPrimitive = { id: String(value['id'] ?? ''), shape: base.shape };
   for (const [key, v] of Object.entries(base)) {
     if (!MANAGED.includes(key) && !(SHAPE_FIELDS[base.shape] ?? []).some((f) => f.key === key)) out[key] = v;
   }
+  const kept = (si: number | null, held: unknown): unknown => (si === null && referenceIn(held) ? held : si);
   for (const field of SHAPE_FIELDS[base.shape] ?? []) {
     if (field.components) {
-      const parts = field.components.map((_, i) => siOf(value[`${field.key}_${i}`], field.units));
+      const parts = field.components.map((_, i) => kept(siOf(value[`${field.key}_${i}`], field.units), heldAt(base, field.key, i)));
       if (!(field.optional && parts.every((x) => x === null))) out[field.key] = parts;
     } else {
-      const si = siOf(value[field.key], field.units);
+      const si = kept(siOf(value[field.key], field.units), base[field.key]);
       if (si !== null || !field.optional) out[field.key] = si;
     }
   }
-  out['position'] = [0, 1, 2].map((i) => siOf(value[`position_${i}`], EDITOR_UNITS.length) ?? 0);
+  out['position'] = [0, 1, 2].map((i) => kept(siOf(value[`position_${i}`], EDITOR_UNITS.length), heldAt(base, 'position', i)) ?? 0);
   out['rotationDeg'] = [0, 1, 2].map((i) => siOf(value[`rotation_${i}`], EDITOR_UNITS.angle) ?? 0);
   const source: MaterialSource = base.shape === 'point' ? 'mass' : ((value['source'] as MaterialSource) ?? 'density');
   if (source === 'material') out['materialId'] = (value['materialId'] as string | null) ?? '';
-  else if (source === 'mass') out['mass'] = siOf(value['mass'], EDITOR_UNITS.mass);
-  else out['density'] = siOf(value['density'], EDITOR_UNITS.density);
+  else if (source === 'mass') out['mass'] = kept(siOf(value['mass'], EDITOR_UNITS.mass), base['mass']);
+  else out['density'] = kept(siOf(value['density'], EDITOR_UNITS.density), base['density']);
   out['mode'] = base.shape === 'point' ? 'add' : value['mode'] === 'remove' ? 'remove' : 'add';
   if (base.shape === 'mesh') {
     const meshId = String(value['meshId'] ?? '').trim();

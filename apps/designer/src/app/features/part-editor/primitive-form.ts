@@ -16,6 +16,7 @@ import {
   formValueToPrimitive,
   numericControls,
   primitiveToFormValue,
+  referencedControls,
   type NumericControl,
   type PrimitiveFormValue,
 } from './primitive-form-model';
@@ -91,6 +92,8 @@ export class PrimitiveForm {
     return Array.isArray(p['triangles']) ? (p['triangles'] as unknown[]).length : null;
   });
   protected readonly hasSizeTolerance = computed(() => hasSizeTolerance(this.shape()));
+  /** Controls whose field follows a named parameter (shown empty), with the parameter they follow. */
+  protected readonly references = computed(() => referencedControls(this.primitive()));
   /** What an empty density (mass) scatter stands for. */
   protected readonly toleranceHint = computed(() => densityDefaultHint(this.primitive(), this.materials()));
   /** The tolerance fields' problems in words (the schema's or the server's). */

@@ -76,6 +76,72 @@ describe('SpinReportPanel', () => {
     expect(text('report-notes')).toContain('estimates');
   });
 
+  // An invented practice block: a box 0.3 × 0.2 × 0.1 m has its moments in the ratio 13 : 10 : 5
+  // about z, y and x (I ∝ b² + c², Machinery's Handbook box formula).
+  const block = (axis: number[], extra: Record<string, unknown> = {}) => ({
+    name: 'Practice block',
+    primitives: [{ id: 'block', shape: 'box', size: [0.3, 0.2, 0.1], density: 500 }],
+    spin: { axis, rate: 2 },
+    ...extra,
+  });
+  async function shown(report: unknown) {
+    const fixture = TestBed.createComponent(SpinReportPanel);
+    fixture.componentRef.setInput('report', report);
+    fixture.componentRef.setInput('rate', 2);
+    await fixture.whenStable();
+    const host: HTMLElement = fixture.nativeElement;
+    return (id: string) => host.querySelector(`[data-testid="${id}"]`)?.textContent?.replace(/\s+/g, ' ').trim() ?? null;
+  }
+
+  it('names the axis the motion circles, with its cone, where it is not the nearest axis (44° from the minor axis)', async () => {
+    const a = (44 * Math.PI) / 180;
+    const report = analyzePart(block([Math.cos(a), 0, Math.sin(a)]));
+    expect(report.spin.nearestAxis).toBe('minor');
+    expect(report.spin.motionAxis).toBe('major');
+    const text = await shown(report);
+    expect(text('report-verdict')).toContain('nearest the minor principal axis');
+    expect(text('report-motion')).toBe(
+      `— the motion circles the major axis (cone half-angle ${formatFigure(report.spin.coneHalfAngleDeg, 3)}°)`,
+    );
+    expect(text('report-turns')).not.toContain('e-fold'); // no exponential growth away from the intermediate axis
+    // Where the motion circles the nearest axis nothing extra is said.
+    expect((await shown(analyzePart(block([1, 0, 0]))))('report-motion')).toBeNull();
+  });
+
+  it("shows the flight time with its source, marking a category's figure as a common practice estimate", async () => {
+    const racket = await shown(analyzePart(RACKET));
+    expect(racket('report-flight')).toBe('In the air about 1 s (category default, a common practice estimate).');
+    const late = analyzePart(block([0, 1, 0], { category: 'juggling' }));
+    expect(late.spin.verdict).toBe('watch');
+    expect((await shown(late))('report-flight')).toBe(
+      'In the air about 1 s (category default, a common practice estimate): the first flip comes after the flight ends.',
+    );
+    const own = await shown(analyzePart(block([0, 1, 0], { flightTime: 30 })));
+    expect(own('report-flight')).toBe('In the air about 30 s (set for this part).');
+  });
+
+  it('still shows a report stored before the motion axis and flight time were computed', async () => {
+    const {
+      motionAxis: _m,
+      coneHalfAngleDeg: _c,
+      wobblePeriod: _w,
+      flightTime: _f,
+      flightTimeSource: _s,
+      ...oldSpin
+    } = analyzePart(block([0, 0, 1], { category: 'juggling' })).spin;
+    const old = { ...analyzePart(block([0, 0, 1])), spin: oldSpin };
+    const text = await shown(old);
+    expect(text('report-explanation')).toBe(oldSpin.explanation);
+    expect(text('report-motion')).toBeNull();
+    expect(text('report-flight')).toBeNull();
+    expect(text('report-wobble')).toBe(
+      `Wobble in the part's own frame: ${formatFigure(oldSpin.wobbleFrequency! / (2 * Math.PI), 3)} Hz, not growing.`,
+    );
+    // The same report with its period says how often the part wobbles.
+    const current = analyzePart(block([0, 0, 1]));
+    expect((await shown(current))('report-wobble')).toContain(`once every ${formatFigure(current.spin.wobblePeriod, 3)} s`);
+  });
+
   it('asks for a grip frame when the trade figures cannot be taken', async () => {
     const { grip: _none, ...withoutGrip } = RACKET;
     const fixture = TestBed.createComponent(SpinReportPanel);

@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
-import type { SpinReport } from '@tumblewise/engine';
+import type { SpinAssessment, SpinReport } from '@tumblewise/engine';
 import { VerdictChip } from '@tumblewise/ui';
 import {
   formatFigure,
@@ -65,6 +65,45 @@ export class SpinReportPanel {
     if (n === null) return '';
     const shown = formatFigure(n, 2);
     return `${shown} ${shown === '1' ? 'turn' : 'turns'}`;
+  });
+  /**
+   * The axis the motion circles, where it is not the nearest one. Reports stored before the engine
+   * computed it have no motion axis, cone or flight time: those lines are left out.
+   */
+  protected readonly motion = computed(() => {
+    const spin: Partial<SpinAssessment> | undefined = this.report()?.spin;
+    const axis = spin?.motionAxis;
+    if (!spin || axis === undefined || axis === spin.nearestAxis) return null;
+    if (axis === 'separatrix') return '— the motion lies on the separatrix between the major and the minor axis';
+    const cone = spin.coneHalfAngleDeg ?? null;
+    return `— the motion circles the ${axis} axis${cone === null ? '' : ` (cone half-angle ${formatFigure(cone, 3)}°)`}`;
+  });
+  /** Time to the first flip, with the e-folding time where the flip grows from the intermediate axis. */
+  protected readonly flipDetail = computed(() => {
+    const spin = this.report()?.spin;
+    if (!spin) return '';
+    const eFolding = spin.eFoldingTime;
+    return `${formatFigure(spin.flipTime, 3)} s${eFolding === null ? '' : `; a disturbance grows e-fold every ${formatFigure(eFolding, 3)} s`}`;
+  });
+  /** Time in the air the flip is compared with, and where it comes from. */
+  protected readonly flight = computed(() => {
+    const spin: Partial<SpinAssessment> | undefined = this.report()?.spin;
+    const seconds = spin?.flightTime;
+    if (seconds === undefined || seconds === null) return null;
+    const basis = spin?.flightTimeSource === 'part' ? 'set for this part' : 'category default, a common practice estimate';
+    const flip = spin?.flipTime ?? null;
+    const after = flip !== null && flip > seconds ? ': the first flip comes after the flight ends' : '';
+    return `In the air about ${formatFigure(seconds, 3)} s (${basis})${after}.`;
+  });
+  /** The body-frame wobble: its exact period where the report has one, else the frequency older reports carry. */
+  protected readonly wobble = computed(() => {
+    const spin: Partial<SpinAssessment> | undefined = this.report()?.spin;
+    const frequency = spin?.wobbleFrequency ?? null;
+    if (!spin || spin.flipTime != null || frequency === null || !(frequency > 0)) return null;
+    const period = spin.wobblePeriod ?? null;
+    return period !== null
+      ? `once every ${formatFigure(period, 3)} s (${formatFigure(1 / period, 3)} Hz)`
+      : `${formatFigure(frequency / (2 * Math.PI), 3)} Hz`;
   });
   protected readonly mass = computed(() => (this.report() ? showMass(this.report()!.mass) : null));
   protected readonly volume = computed(() => (this.report() ? showVolume(this.report()!.volume) : null));
